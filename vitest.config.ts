@@ -1,0 +1,13 @@
+import { defineConfig } from 'vitest/config'
+
+export default defineConfig({
+  resolve: { tsconfigPaths: true },
+  test: {
+    include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
+    exclude: ['tests/e2e/**', 'node_modules/**'],
+    environment: 'node',
+    testTimeout: 30_000,
+    hookTimeout: 60_000,
+    pool: 'forks',
+  },
+})
