@@ -1,0 +1,40 @@
+import type { ReactNode } from 'react'
+import Link from 'next/link'
+import { signOutAction } from '@/app/(auth)/actions'
+import { Wordmark } from '@/app/_components/wordmark'
+import { requirePageUser } from '@/app/_lib/session'
+import { mailInboxEnabled } from '@/lib/mail/inbox'
+
+/** The signed-in shell; its gate sends visitors without a session to sign-in. */
+export default async function AppLayout({ children }: { children: ReactNode }) {
+  const user = await requirePageUser()
+  return (
+    <>
+      <header className="flex items-center gap-6 border-b border-rule bg-white px-6 py-2.5">
+        <Wordmark />
+        <nav className="flex gap-4 text-sm">
+          <Link href="/projects" className="hover:text-accent">
+            Projects
+          </Link>
+          {user.isAdmin && mailInboxEnabled() && (
+            <Link href="/admin/mail" className="hover:text-accent">
+              Caught mail
+            </Link>
+          )}
+        </nav>
+        <div className="ml-auto flex items-center gap-3 text-sm">
+          <span data-testid="current-user">
+            {user.name}
+            {user.isAdmin && <span className="ml-1.5 rounded bg-ink px-1.5 py-0.5 text-[10px] font-semibold text-white uppercase">admin</span>}
+          </span>
+          <form action={signOutAction}>
+            <button type="submit" className="btn-quiet">
+              Sign out
+            </button>
+          </form>
+        </div>
+      </header>
+      <main className="mx-auto max-w-7xl px-6 py-6">{children}</main>
+    </>
+  )
+}

@@ -1,0 +1,37 @@
+import type { Metadata } from 'next'
+import Link from 'next/link'
+import { loadProjectContext } from '@/app/_lib/project-context'
+import { can } from '@/lib/review/permissions'
+import { ROLE_LABELS } from '@/lib/review/roles'
+import { CreateCalcForm } from './create-calc-form'
+import { RegisterTable } from './register-table'
+
+export const metadata: Metadata = { title: 'Calc register' }
+
+export default async function ProjectPage({ params }: { params: Promise<{ projectId: string }> }) {
+  const { projectId } = await params
+  const { project, actor } = await loadProjectContext(projectId)
+  return (
+    <div className="flex flex-col gap-5">
+      <div className="flex flex-wrap items-end gap-4">
+        <div>
+          <div className="font-mono text-xs text-accent">{project.code}</div>
+          <h1 className="h1">{project.name}</h1>
+          <div className="text-xs text-ink/60">
+            {project.client} · you are {actor.role ? ROLE_LABELS[actor.role] : 'site administrator'}
+          </div>
+        </div>
+        {can(actor, 'member.manage') && (
+          <Link href={`/projects/${projectId}/members`} className="btn-quiet ml-auto" data-testid="manage-members">
+            Members
+          </Link>
+        )}
+      </div>
+      <section className="flex flex-col gap-2">
+        <h2 className="h2">Calc register</h2>
+        <RegisterTable projectId={projectId} />
+      </section>
+      {can(actor, 'calc.create') && <CreateCalcForm projectId={projectId} />}
+    </div>
+  )
+}

@@ -1,0 +1,130 @@
+'use client'
+
+import Link from 'next/link'
+import { useMemo, useState } from 'react'
+import useSWR from 'swr'
+import {
+  createColumnHelper,
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type SortingState,
+} from '@tanstack/react-table'
+import { StateBadge } from '@/app/_components/state-badge'
+import { CALC_TYPE_LABELS, type CalcType } from '@/lib/schemas/project'
+import type { RevisionState } from '@/lib/review/roles'
+
+interface Row {
+  id: string
+  number: string
+  title: string
+  calcType: CalcType
+  state: RevisionState
+  currentRevision: string | null
+  engineer: string | null
+  checker: string | null
+  approver: string | null
+  updatedAt: string
+}
+
+async function fetchJson<T>(url: string): Promise<T> {
+  const res = await fetch(url)
+  if (!res.ok) throw new Error(((await res.json().catch(() => null)) as { message?: string } | null)?.message ?? `HTTP ${res.status}`)
+  return res.json() as Promise<T>
+}
+
+const col = createColumnHelper<Row>()
+
+/** The calc register: sortable by any column, filtered by one search box over every text column. */
+export function RegisterTable({ projectId }: { projectId: string }) {
+  const { data, error, isLoading } = useSWR(`/api/projects/${projectId}/calcs`, fetchJson<{ calcs: Row[] }>)
+  const [sorting, setSorting] = useState<SortingState>([{ id: 'number', desc: false }])
+  const [filter, setFilter] = useState('')
+  const columns = useMemo(
+    () => [
+      col.accessor('number', {
+        header: 'Number',
+        cell: (c) => (
+          <Link href={`/projects/${projectId}/calcs/${c.row.original.id}`} className="font-mono text-accent underline">
+            {c.getValue()}
+          </Link>
+        ),
+      }),
+      col.accessor('title', { header: 'Title' }),
+      col.accessor((r) => CALC_TYPE_LABELS[r.calcType], { id: 'type', header: 'Type' }),
+      col.accessor('currentRevision', { header: 'Rev.', cell: (c) => c.getValue() ?? '—' }),
+      col.accessor('state', { header: 'State', cell: (c) => <StateBadge state={c.getValue()} /> }),
+      col.accessor('engineer', { header: 'Engineer', cell: (c) => c.getValue() ?? '—' }),
+      col.accessor('checker', { header: 'Checker', cell: (c) => c.getValue() ?? '—' }),
+      col.accessor('approver', { header: 'Approver', cell: (c) => c.getValue() ?? '—' }),
+      col.accessor('updatedAt', { header: 'Last change', cell: (c) => new Date(c.getValue()).toISOString().slice(0, 16).replace('T', ' ') }),
+    ],
+    [projectId],
+  )
+  const table = useReactTable({
+    data: data?.calcs ?? [],
+    columns,
+    state: { sorting, globalFilter: filter },
+    onSortingChange: setSorting,
+    onGlobalFilterChange: setFilter,
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    getFilteredRowModel: getFilteredRowModel(),
+  })
+
+  if (error) return <p role="alert" className="panel bg-fail-soft p-4 text-fail">Could not load the register: {String(error.message)}</p>
+  return (
+    <div className="panel overflow-x-auto">
+      <div className="flex items-center gap-3 border-b border-rule px-3 py-2">
+        <input
+          type="search"
+          placeholder="Filter by number, title, person, state…"
+          aria-label="Filter the register"
+          className="field max-w-sm"
+          value={filter}
+          onChange={(e) => setFilter(e.target.value)}
+        />
+        <span className="text-xs text-ink/60">{isLoading ? 'Loading…' : `${table.getRowModel().rows.length} of ${data?.calcs.length ?? 0} calcs`}</span>
+      </div>
+      <table className="w-full text-left text-sm" data-testid="register">
+        <thead className="bg-paper text-xs text-ink/70">
+          {table.getHeaderGroups().map((hg) => (
+            <tr key={hg.id}>
+              {hg.headers.map((h) => {
+                const dir = h.column.getIsSorted()
+                return (
+                  <th key={h.id} className="px-3 py-2 font-semibold" aria-sort={dir === 'asc' ? 'ascending' : dir === 'desc' ? 'descending' : 'none'}>
+                    <button type="button" className="flex items-center gap-1 hover:text-accent" onClick={h.column.getToggleSortingHandler()}>
+                      {flexRender(h.column.columnDef.header, h.getContext())}
+                      <span aria-hidden="true">{dir === 'asc' ? '▲' : dir === 'desc' ? '▼' : ''}</span>
+                    </button>
+                  </th>
+                )
+              })}
+            </tr>
+          ))}
+        </thead>
+        <tbody>
+          {table.getRowModel().rows.map((row) => (
+            <tr key={row.id} className="border-t border-rule hover:bg-accent-soft/40">
+              {row.getVisibleCells().map((cell) => (
+                <td key={cell.id} className="px-3 py-1.5 whitespace-nowrap">
+                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                </td>
+              ))}
+            </tr>
+          ))}
+          {!isLoading && table.getRowModel().rows.length === 0 && (
+            <tr>
+              <td colSpan={columns.length} className="px-3 py-6 text-center text-ink/60">
+                {data?.calcs.length ? 'No calc matches the filter.' : 'No calcs yet.'}
+              </td>
+            </tr>
+          )}
+        </tbody>
+      </table>
+    </div>
+  )
+}

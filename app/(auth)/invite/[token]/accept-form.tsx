@@ -1,0 +1,23 @@
+'use client'
+
+import { useActionState } from 'react'
+import { Field, FormMessage, SubmitButton } from '@/app/_components/form'
+import { acceptInvitationAction } from '../../actions'
+
+export function AcceptForm({ token, email }: { token: string; email: string }) {
+  const [state, action] = useActionState(acceptInvitationAction, {})
+  return (
+    <form action={action} className="flex flex-col gap-4" noValidate>
+      <h1 className="h1">Welcome to Inverso</h1>
+      <p className="text-ink/70">
+        Set up the account for <strong>{email}</strong>.
+      </p>
+      <FormMessage state={state} />
+      <input type="hidden" name="token" value={token} />
+      <Field name="name" label="Your name" autoComplete="name" state={state} hint="As it should appear on signed calcs." />
+      <Field name="password" label="Password" type="password" autoComplete="new-password" state={state} hint="At least 10 characters." />
+      <Field name="confirm" label="Password again" type="password" autoComplete="new-password" state={state} />
+      <SubmitButton>Set password and sign in</SubmitButton>
+    </form>
+  )
+}

@@ -1,0 +1,23 @@
+import type { Metadata } from 'next'
+import type { ReactNode } from 'react'
+import { GENERAL_CAUTION } from '@/lib/cautions'
+import { notoMono, notoSans } from './fonts'
+import './globals.css'
+
+export const metadata: Metadata = {
+  title: { default: 'Inverso', template: '%s · Inverso' },
+  description: 'Straight-line linkage calculations, checked and signed.',
+}
+
+export default function RootLayout({ children }: { children: ReactNode }) {
+  return (
+    <html lang="en" className={`${notoSans.variable} ${notoMono.variable}`}>
+      <body className="flex min-h-screen flex-col font-sans text-sm antialiased">
+        <div className="flex-1">{children}</div>
+        <footer className="border-t border-rule bg-caution-soft px-6 py-2 text-xs text-caution" data-testid="caution">
+          <strong>Caution.</strong> {GENERAL_CAUTION}
+        </footer>
+      </body>
+    </html>
+  )
+}

@@ -1,0 +1,37 @@
+import { z } from 'zod'
+import { PROJECT_ROLES } from '@/lib/review/roles'
+import { emailField } from './auth'
+
+export const CALC_TYPES = ['peaucellier', 'hart'] as const
+export type CalcType = (typeof CALC_TYPES)[number]
+export const CALC_TYPE_LABELS: Record<CalcType, string> = {
+  peaucellier: 'Peaucellier–Lipkin cell',
+  hart: "Hart's inversor",
+}
+
+export const createCalcSchema = z.object({
+  number: z
+    .string()
+    .trim()
+    .min(1, 'Give the calc a number.')
+    .max(40, 'Use at most 40 characters.')
+    .regex(/^[A-Za-z0-9][A-Za-z0-9._/-]*$/, 'Use letters, digits and . _ / - only.'),
+  title: z.string().trim().min(3, 'Give the calc a title of at least 3 characters.').max(200),
+  calcType: z.enum(CALC_TYPES, { message: 'Choose a mechanism.' }),
+})
+
+export const inviteSchema = z.object({
+  email: emailField,
+  role: z.enum(PROJECT_ROLES, { message: 'Choose a role.' }),
+})
+
+export const createProjectSchema = z.object({
+  code: z
+    .string()
+    .trim()
+    .min(2, 'Give the project a code of at least 2 characters.')
+    .max(20)
+    .regex(/^[A-Z0-9-]+$/, 'Use capital letters, digits and - only.'),
+  name: z.string().trim().min(3, 'Give the project a name.').max(120),
+  client: z.string().trim().max(120).default(''),
+})
