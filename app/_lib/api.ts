@@ -1,5 +1,5 @@
 import 'server-only'
-import { getActor } from '@/db/queries'
+import { getActor, getProject } from '@/db/queries'
 import { AppError, HTTP_STATUS } from '@/lib/errors'
 import { assertCan, type Actor, type Permission } from '@/lib/review/permissions'
 import { requireUser } from './session'
@@ -16,6 +16,7 @@ export function handleApiError(err: unknown): Response {
 /** Authenticates the caller and checks `permission` in the project; throws AppError otherwise. */
 export async function requireProjectPermission(projectId: string, permission: Permission): Promise<Actor> {
   const user = await requireUser()
+  if (!(await getProject(projectId))) throw new AppError('not_found', 'No such project.')
   const actor = await getActor(user, projectId)
   assertCan(actor, permission)
   return actor

@@ -1,0 +1,110 @@
+import { eq } from 'drizzle-orm'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { db } from '@/db'
+import { mailTokens, projectMembers, users } from '@/db/schema'
+import { seedDemo } from '@/db/seed/seed'
+import { DEMO_PASSWORD, DEMO_USERS } from '@/db/seed/demo-data'
+import { acceptInvitation, findToken, inviteMember } from '@/lib/auth/invitations'
+import { requestPasswordReset, resetPassword } from '@/lib/auth/password-reset'
+import { MAX_FAILURES, signIn } from '@/lib/auth/sign-in'
+import { hashToken } from '@/lib/auth/tokens'
+import { AppError } from '@/lib/errors'
+import { firstLink, listCaughtMail } from '@/lib/mail/inbox'
+import { useTempEnvironment } from '../helpers/temp-env'
+
+let env: Awaited<ReturnType<typeof useTempEnvironment>>
+beforeAll(async () => {
+  env = await useTempEnvironment()
+  await seedDemo(db)
+})
+afterAll(() => env.close())
+
+const admin = () => db.select().from(users).where(eq(users.email, DEMO_USERS[0].email)).then((r) => r[0])
+const tokenFromLatestMail = (to: string) => {
+  const mail = listCaughtMail(env.mailDir).find((m) => m.to.includes(to))
+  expect(mail, `a mail to ${to} was caught`).toBeDefined()
+  return firstLink(mail!)!.split('/').pop()!
+}
+
+async function expectAppError(p: Promise<unknown>, code: string, field?: string) {
+  const err = await p.then(() => null, (e: unknown) => e)
+  expect(err).toBeInstanceOf(AppError)
+  expect((err as AppError).code).toBe(code)
+  if (field) expect((err as AppError).fieldErrors?.[field]).toBeTruthy()
+}
+
+describe('sign-in', () => {
+  it('opens a session for a demo account and stores an argon2id hash', async () => {
+    const { session, cookie } = await signIn(DEMO_USERS[1].email.toUpperCase(), DEMO_PASSWORD)
+    expect(session.id).toBeTruthy()
+    expect(cookie.name).toBe('inverso_session')
+    const [u] = await db.select().from(users).where(eq(users.email, DEMO_USERS[1].email))
+    expect(u.passwordHash).toMatch(/^\$argon2id\$/)
+  })
+
+  it('says which field is wrong: unknown e-mail, wrong password', async () => {
+    await expectAppError(signIn('nobody@feldmark.example', 'whatever-123'), 'invalid', 'email')
+    await expectAppError(signIn(DEMO_USERS[2].email, 'not-the-password'), 'invalid', 'password')
+  })
+
+  it('refuses further attempts after repeated failures, even with the right password', async () => {
+    const email = DEMO_USERS[3].email
+    for (let i = 0; i < MAX_FAILURES; i++) await expectAppError(signIn(email, `wrong-${i}`), 'invalid')
+    await expectAppError(signIn(email, DEMO_PASSWORD), 'rate_limited')
+  })
+})
+
+describe('invitations', () => {
+  it('sends an invitation the fake catches; its link sets a password and adds the membership', async () => {
+    const a = await admin()
+    const [{ projectId }] = await db.select({ projectId: projectMembers.projectId }).from(projectMembers).limit(1)
+    await inviteMember({ projectId, email: 'New.Checker@Feldmark.example', role: 'checker', invitedBy: { id: a.id, name: a.name } })
+    const token = tokenFromLatestMail('new.checker@feldmark.example')
+    const { session } = await acceptInvitation({ token, name: 'Nela Checker', password: 'a-long-password' })
+    expect(session.userId).toBeTruthy()
+    const [m] = await db.select().from(projectMembers).where(eq(projectMembers.userId, session.userId))
+    expect(m.role).toBe('checker')
+    // The link is single-use.
+    await expectAppError(acceptInvitation({ token, name: 'Again', password: 'a-long-password' }), 'invalid')
+    await signIn('new.checker@feldmark.example', 'a-long-password')
+  })
+
+  it('an expired invitation gets a clear message and creates nothing', async () => {
+    const a = await admin()
+    const [{ projectId }] = await db.select({ projectId: projectMembers.projectId }).from(projectMembers).limit(1)
+    await inviteMember({ projectId, email: 'late@feldmark.example', role: 'approver', invitedBy: { id: a.id, name: a.name } })
+    const token = tokenFromLatestMail('late@feldmark.example')
+    await db.update(mailTokens).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(mailTokens.tokenHash, hashToken(token)))
+    const err = await findToken(token, 'invite').catch((e: AppError) => e)
+    expect((err as AppError).message).toMatch(/expired/)
+    await expectAppError(acceptInvitation({ token, name: 'Late', password: 'a-long-password' }), 'invalid')
+    expect(await db.select().from(users).where(eq(users.email, 'late@feldmark.example'))).toHaveLength(0)
+  })
+
+  it('inviting an existing member is refused at the e-mail field', async () => {
+    const a = await admin()
+    const [{ projectId }] = await db.select({ projectId: projectMembers.projectId }).from(projectMembers).limit(1)
+    await expectAppError(
+      inviteMember({ projectId, email: DEMO_USERS[1].email, role: 'checker', invitedBy: { id: a.id, name: a.name } }),
+      'conflict',
+      'email',
+    )
+  })
+})
+
+describe('password reset', () => {
+  it('mails a link that sets a new password and ends old sessions', async () => {
+    const email = DEMO_USERS[2].email
+    await requestPasswordReset(email)
+    const token = tokenFromLatestMail(email)
+    await resetPassword(token, 'brand-new-password')
+    await signIn(email, 'brand-new-password')
+    await expectAppError(signIn(email, DEMO_PASSWORD), 'invalid', 'password')
+  })
+
+  it('an unknown address sends nothing and raises nothing', async () => {
+    const before = listCaughtMail(env.mailDir).length
+    await requestPasswordReset('ghost@feldmark.example')
+    expect(listCaughtMail(env.mailDir)).toHaveLength(before)
+  })
+})
