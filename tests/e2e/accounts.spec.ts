@@ -1,0 +1,77 @@
+import { expect, test } from '@playwright/test'
+import { openDemoProject, signInAs } from './helpers'
+
+test('a wrong password is reported at the password field and the e-mail is kept', async ({ page }) => {
+  await page.goto('/sign-in')
+  await page.getByLabel('E-mail').fill('ines.vogt@feldmark.example')
+  await page.getByLabel('Password').fill('definitely-wrong')
+  await page.getByRole('button', { name: 'Sign in' }).click()
+  await expect(page.locator('#f-password-error')).toHaveText('Wrong password.')
+  await expect(page.getByLabel('E-mail')).toHaveValue('ines.vogt@feldmark.example')
+})
+
+test('an unknown e-mail is reported at the e-mail field', async ({ page }) => {
+  await page.goto('/sign-in')
+  await page.getByLabel('E-mail').fill('someone@elsewhere.example')
+  await page.getByLabel('Password').fill('whatever-it-is')
+  await page.getByRole('button', { name: 'Sign in' }).click()
+  await expect(page.locator('#f-email-error')).toContainText('No account')
+})
+
+test('the engineer creates a draft calc; a duplicate number is refused at the number field', async ({ page }) => {
+  await signInAs(page, 'engineer')
+  await openDemoProject(page)
+  const form = page.getByTestId('create-calc')
+  await form.getByLabel('Number').fill('LC-010')
+  await form.getByLabel('Title').fill('Lid tucker guide')
+  await form.getByRole('button', { name: 'Create draft' }).click()
+  await expect(form.getByRole('alert')).toContainText('LC-010 created')
+  await expect(page.getByTestId('register').getByRole('link', { name: 'LC-010' })).toBeVisible()
+
+  await form.getByLabel('Number').fill('LC-001')
+  await form.getByLabel('Title').fill('Duplicate')
+  await form.getByRole('button', { name: 'Create draft' }).click()
+  await expect(form.locator('#f-number-error')).toContainText('already exists')
+  await expect(form.getByLabel('Title')).toHaveValue('Duplicate')
+})
+
+test('an admin invites a person; the caught mail link lets them set a password and sign in', async ({ page, browser }) => {
+  await signInAs(page, 'admin')
+  await openDemoProject(page)
+  await page.getByTestId('manage-members').click()
+  const form = page.getByTestId('invite')
+  await form.getByLabel('E-mail').fill('ola.nord@feldmark.example')
+  await form.getByLabel('Role').selectOption('checker')
+  await form.getByRole('button', { name: 'Send invitation' }).click()
+  await expect(form.getByRole('alert')).toContainText('Invitation sent')
+
+  await page.getByRole('link', { name: 'Caught mail' }).click()
+  const mail = page.locator('article', { hasText: 'ola.nord@feldmark.example' }).first()
+  await expect(mail).toContainText('Invitation to Carton erector CE-40')
+  const link = (await mail.locator('pre').innerText()).match(/http\S+/)![0]
+
+  const guest = await browser.newContext()
+  const p2 = await guest.newPage()
+  await p2.goto(link)
+  await p2.getByLabel('Your name').fill('Ola Nord')
+  await p2.getByLabel('Password', { exact: true }).fill('short')
+  await p2.getByLabel('Password again').fill('short')
+  await p2.getByRole('button', { name: /Set password/ }).click()
+  await expect(p2.locator('#f-password-error')).toContainText('at least 10')
+  await p2.getByLabel('Password', { exact: true }).fill('ola-long-password')
+  await p2.getByLabel('Password again').fill('ola-long-password')
+  await p2.getByRole('button', { name: /Set password/ }).click()
+  await expect(p2).toHaveURL(/\/projects$/)
+  await openDemoProject(p2)
+  await expect(p2.getByTestId('create-calc')).toHaveCount(0)
+  await guest.close()
+})
+
+test('a visitor without a session is sent to sign-in; an unknown project is a 404', async ({ page }) => {
+  await page.goto('/projects')
+  await expect(page).toHaveURL(/\/sign-in$/)
+  await signInAs(page, 'engineer')
+  const res = await page.goto('/projects/does-not-exist')
+  expect(res?.status()).toBe(404)
+  await expect(page.getByText('Nothing here')).toBeVisible()
+})
