@@ -108,3 +108,18 @@ describe('example inputs run as documented', () => {
     expect(r.ok).toBe(true)
   })
 })
+
+describe('TeX of every step renders in KaTeX', async () => {
+  const katex = (await import('katex')).default
+  const beam = envelope('working', 1)
+  beam.links.OA = { ...beam.links.OA, maxMoment: x(50000, 15) }
+  const envs = [beam]
+  const all = [
+    { kind: 'allowable' as const, factorOfSafety: 2 },
+    { kind: 'en1993' as const, gammaM0: 1, gammaM1: 1, gammaM2: 1.25, gammaM6ser: 1 },
+    { kind: 'aisc360' as const, method: 'LRFD' as const },
+  ].flatMap((basis) => runChecks({ ...input, basis }, envs).steps)
+  it.each(all.map((s) => [s.id, s] as const))('%s', (_id, s) => {
+    for (const tex of [s.formula, s.substituted]) if (tex) expect(() => katex.renderToString(tex, { throwOnError: true })).not.toThrow()
+  })
+})
