@@ -118,6 +118,8 @@ export interface PositionResult {
   linkMoments?: Record<string, number>
   /** Smallest transmission angle in the cell at this position, degrees. */
   transmissionAngleDeg?: number
+  /** Transmission angle at each watched vertex, folded to 0–90° (0° = links in line), degrees. */
+  transmissionAngles?: Record<string, number>
 }
 
 /** Which joints a link connects; used to draw the mechanism. */
@@ -138,4 +140,43 @@ export interface StrokeLimits {
   half: number
   crankMinDeg: number
   crankMaxDeg: number
+}
+
+/** A requested crank angle left without statics: out of reach, or at or near a toggle. */
+export interface ToggleFlag {
+  crankDeg: number
+  reason: 'unreachable' | 'singular' | 'force-amplification'
+  /** Largest pin force per newton of load at the tracer, when it could be computed. */
+  amplification?: number
+}
+
+/** The path the tracer follows: a straight line, or a circle arc when the crank circle misses the pole. */
+export type TracerPath =
+  | { kind: 'line'; point: Point; direction: Point }
+  | { kind: 'arc'; centre: Point; radius: number }
+
+/** Result of a straight-line linkage calculation (lib/calc/mechanism.ts). */
+export interface MechanismResult {
+  mechanism: 'peaucellier' | 'hart'
+  engineVersion: string
+  /** k = |OP|·|OT|, mm². */
+  inversionConstant: number
+  /** k/(2r), mm: the line's distance from the pole when the crank circle passes through it. */
+  lineOffset: number
+  feasibility: Feasibility
+  /** Between the toggle positions; `usable` after the user's toggle margin. */
+  stroke: StrokeLimits & { usable: StrokeLimits }
+  /** Null when the geometry is infeasible. */
+  line: TracerPath | null
+  /** Largest distance of the solved tracer positions from the chord through the end positions, mm. */
+  straightness: number
+  /** Positions under the first load case. */
+  positions: PositionResult[]
+  loadCases: { name: string; positions: PositionResult[] }[]
+  envelope: LoadCaseEnvelope[]
+  links: (LinkTopology & { length: number })[]
+  groundJoints: string[]
+  toggles: ToggleFlag[]
+  steps: Step[]
+  tables: Table[]
 }

@@ -1,0 +1,11 @@
+/** Public surface of the planar linkage core. */
+export { analyse, DEFAULT_SWEEP_COUNT, type AnalyseInput, type AnalyseOutput } from './analyse'
+export { peaucellierCell, type PeaucellierGeometry } from './cells/peaucellier'
+export { hartCell, type HartGeometry } from './cells/hart'
+export type { InversorCell } from './cells/cell'
+export { buildModel, type LinkageDef, type LinkageModel, type LinkDef } from './model'
+export { solvePositionNewton, posesFromJoints, jointsFromPoses } from './newton'
+export { solveStatics, equilibriumResidual, type CaseLoads } from './statics'
+export { runSweep, type LoadInput } from './sweep'
+export { linkageOf, placeAt, crankPoint } from './crank'
+export { tracerPath, assessGeometry, type TracerPath } from './geometry'

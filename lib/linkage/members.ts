@@ -1,0 +1,100 @@
+import { linkLength, type LinkageModel } from './model'
+import type { CaseLoads, CaseStatics } from './statics'
+
+/** Internal forces of one link at one position, from its end forces. */
+export interface MemberForces {
+  /** Axial force at mid-length, N, tension positive. */
+  axialMid: number
+  /** Largest and smallest axial force over the link's segments, N. */
+  axialMax: number
+  axialMin: number
+  /** Largest |bending moment| along the link, N·mm. */
+  moment: number
+}
+
+/**
+ * Axial force and bending moment along a straight link carrying point forces
+ * at its pins, a couple (the drive torque on the crank) and a uniform weight.
+ * Cutting at distance x from the first point, the part [0, x] is in balance:
+ * N(x) = −Σ fᵢ·e − w·e·x and M(x) = Σ (sᵢ − x) fᵢ·n + C − w·n x²/2, where the
+ * sums run over the points before the cut. |M| is largest at a point or where
+ * the shear V(x) = Σ fᵢ·n + w·n x vanishes inside a segment.
+ */
+export function memberForces(model: LinkageModel, pts: Float64Array, b: number, loads: CaseLoads, st: CaseStatics): MemberForces {
+  const link = model.links[b]
+  const o = 2 * model.offset[b]
+  const last = o + 2 * (link.points.length - 1)
+  const len = linkLength(link)
+  const ex = (pts[last] - pts[o]) / len
+  const ey = (pts[last + 1] - pts[o + 1]) / len
+  const w = loads.weightPerMm
+  const we = w ? w.x * ex + w.y * ey : 0
+  const wn = w ? -w.x * ey + w.y * ex : 0
+  const couple = b === model.crankIndex ? st.torque : 0
+  const f = st.endForces
+  let fe = 0 // Σ fᵢ·e before the cut
+  let fn = 0 // Σ fᵢ·n before the cut
+  let sfn = 0 // Σ sᵢ fᵢ·n before the cut
+  let feMid = 0
+  let axialMax = -Infinity
+  let axialMin = Infinity
+  let moment = 0
+  for (let k = 0; k < link.points.length - 1; k++) {
+    const fx = f[o + 2 * k]
+    const fy = f[o + 2 * k + 1]
+    const s0 = link.stations[k]
+    const s1 = link.stations[k + 1]
+    const fek = fx * ex + fy * ey
+    const fnk = -fx * ey + fy * ex
+    fe += fek
+    fn += fnk
+    sfn += s0 * fnk
+    if (s0 <= len / 2) feMid += fek
+    for (let side = 0; side < 2; side++) {
+      const x = side === 0 ? s0 : s1
+      const ax = -fe - we * x
+      if (ax > axialMax) axialMax = ax
+      if (ax < axialMin) axialMin = ax
+      moment = Math.max(moment, Math.abs(sfn - x * fn + couple - (wn * x * x) / 2))
+    }
+    if (wn !== 0) {
+      const xs = -fn / wn
+      if (xs > s0 && xs < s1) moment = Math.max(moment, Math.abs(sfn - xs * fn + couple - (wn * xs * xs) / 2))
+    }
+  }
+  return { axialMid: -feMid - (we * len) / 2, axialMax, axialMin, moment }
+}
+
+type ForceRec = { x: number; y: number; magnitude: number }
+
+/** Per joint, the force on each attached link from the pin; the largest governs. */
+export function pinForces(model: LinkageModel, st: CaseStatics): Record<string, ForceRec> {
+  const out: Record<string, ForceRec> = {}
+  const f = st.endForces
+  model.links.forEach((l, b) => {
+    for (let k = 0; k < l.points.length; k++) {
+      const i = 2 * (model.offset[b] + k)
+      const m = Math.hypot(f[i], f[i + 1])
+      const j = l.points[k]
+      const cur = out[j]
+      if (!cur || m > cur.magnitude) out[j] = { x: f[i], y: f[i + 1], magnitude: m }
+    }
+  })
+  return out
+}
+
+/** Force the ground applies to the mechanism at each fixed pivot, N. */
+export function groundReactions(model: LinkageModel, st: CaseStatics): Record<string, ForceRec> {
+  const out: Record<string, ForceRec> = {}
+  for (const j of Object.keys(model.ground)) {
+    let x = 0
+    let y = 0
+    for (const b of model.attached[j] ?? []) {
+      const i = 2 * (model.offset[b] + model.links[b].points.indexOf(j))
+      x += st.endForces[i]
+      y += st.endForces[i + 1]
+    }
+    out[j] = { x, y, magnitude: Math.hypot(x, y) }
+  }
+  return out
+}

@@ -1,0 +1,34 @@
+import type { TableOut } from '../results'
+import { caseSlugs, type ReportContext } from './context'
+
+/** One sweep table per load case: crank angle, tracer, torque, every link's axial force. */
+export function sweepTables(ctx: ReportContext): TableOut[] {
+  const sweep = ctx.sweep
+  if (!sweep) return []
+  const slugs = caseSlugs(sweep.cases.map((c) => c.name))
+  const linkNames = sweep.model.links.map((l) => l.name)
+  return sweep.cases.map((c, i) => ({
+    id: `tab.sweep.${slugs[i]}`,
+    section: 'statics',
+    title: `Sweep, case “${c.name}”`,
+    columns: [
+      { key: 'crankDeg', label: 'Crank angle θ', unit: '°', digits: 2 },
+      { key: 'tracerX', label: 'Tracer x', unit: 'mm', digits: 3 },
+      { key: 'tracerY', label: 'Tracer y', unit: 'mm', digits: 3 },
+      { key: 'driveTorque', label: 'Drive torque τ', unit: 'N·mm', digits: 1 },
+      { key: 'transmissionDeg', label: 'Transmission angle', unit: '°', digits: 1 },
+      ...linkNames.map((n) => ({ key: `N_${n}`, label: `N ${n}`, unit: 'N', digits: 1 })),
+    ],
+    rows: c.samples.map(({ position: p }) => {
+      const row: Record<string, number> = {
+        crankDeg: p.crankDeg,
+        tracerX: p.tracer.x,
+        tracerY: p.tracer.y,
+        driveTorque: p.driveTorque,
+        transmissionDeg: p.transmissionAngleDeg ?? 90,
+      }
+      for (const n of linkNames) row[`N_${n}`] = p.linkForces[n]
+      return row
+    }),
+  }))
+}

@@ -1,0 +1,128 @@
+import type { InversorCell } from './cells/cell'
+import { linkageOf, placeAt } from './crank'
+import { groundReactions, memberForces, pinForces, type MemberForces } from './members'
+import { buildModel, pointsFromJoints, type LinkageModel } from './model'
+import type { PositionOut, ToggleOut } from './results'
+import { equilibriumResidual, solveStatics, type CaseLoads } from './statics'
+import { DEG, dot, dist, sub, type Vec } from './vec'
+import { virtualWorkTorque, VW_STEP } from './virtual-work'
+
+export interface LoadInput {
+  name: string
+  /** Force at the tracer, N. */
+  fx: number
+  fy: number
+}
+
+export interface SweepInput {
+  cell: InversorCell
+  crank: number
+  offset: number
+  anglesDeg: number[]
+  loads: LoadInput[]
+  /** Link self-weight, N per mm of length, the same in every case. */
+  weightPerMm: Vec | null
+  /** Positions whose largest pin force per newton at the tracer exceeds this are reported as toggles. */
+  amplificationLimit: number
+}
+
+/** One position under one load case, with the internals the envelope and checks need. */
+export interface CaseSample {
+  position: PositionOut
+  members: Record<string, MemberForces>
+  /** Largest out-of-balance force over the bodies, N. */
+  residual: number
+  vwTorque: number
+  /** |τ − τ_vw| relative to the size of the work terms. */
+  vwError: number
+}
+
+export interface SweepOutput {
+  model: LinkageModel
+  cases: { name: string; samples: CaseSample[] }[]
+  toggles: ToggleOut[]
+}
+
+/** Unit forces at the tracer: they measure force amplification whatever the user's loads are. */
+const PROBES: CaseLoads[] = [
+  { name: 'probe-x', pointLoads: [{ joint: 'T', force: { x: 1, y: 0 } }], weightPerMm: null },
+  { name: 'probe-y', pointLoads: [{ joint: 'T', force: { x: 0, y: 1 } }], weightPerMm: null },
+]
+
+/** Angle between two links at a vertex, folded to 0–90°: 0° means in line (toggle). */
+function transmissionAngle(j: Record<string, Vec>, v: string, a: string, b: string): number {
+  const u = sub(j[a], j[v])
+  const w = sub(j[b], j[v])
+  const c = dot(u, w) / (dist(j[a], j[v]) * dist(j[b], j[v]))
+  const g = Math.acos(Math.min(1, Math.max(-1, c))) / DEG
+  return Math.min(g, 180 - g)
+}
+
+export function runSweep(input: SweepInput): SweepOutput {
+  const { cell, crank: r, offset: e } = input
+  const model = buildModel(linkageOf(cell, e, r))
+  const loads: CaseLoads[] = input.loads.map((l) => ({
+    name: l.name,
+    pointLoads: [{ joint: 'T', force: { x: l.fx, y: l.fy } }],
+    weightPerMm: input.weightPerMm,
+  }))
+  const cases = loads.map((l) => ({ name: l.name, samples: [] as CaseSample[] }))
+  const toggles: ToggleOut[] = []
+  for (const crankDeg of input.anglesDeg) {
+    const th = crankDeg * DEG
+    const joints = placeAt(cell, e, r, th)
+    if (!joints) {
+      toggles.push({ crankDeg, reason: 'unreachable' })
+      continue
+    }
+    const pts = pointsFromJoints(model, joints)
+    const st = solveStatics(model, pts, [...loads, ...PROBES], loads.length)
+    if (!st.ok) {
+      toggles.push({ crankDeg, reason: 'singular' })
+      continue
+    }
+    const amplification = Math.max(st.largestConnection[loads.length], st.largestConnection[loads.length + 1])
+    if (amplification > input.amplificationLimit) {
+      toggles.push({ crankDeg, reason: 'force-amplification', amplification })
+      continue
+    }
+    const before = placeAt(cell, e, r, th - VW_STEP)
+    const after = placeAt(cell, e, r, th + VW_STEP)
+    const angles: Record<string, number> = {}
+    for (const [v, a, b] of cell.transmission) angles[v] = transmissionAngle(joints, v, a, b)
+    const minAngle = Math.min(...Object.values(angles))
+    loads.forEach((lc, i) => {
+      const cs = st.cases[i]
+      const members: Record<string, MemberForces> = {}
+      const linkForces: Record<string, number> = {}
+      const linkMoments: Record<string, number> = {}
+      model.links.forEach((l, b) => {
+        const m = memberForces(model, pts, b, lc, cs)
+        members[l.name] = m
+        linkForces[l.name] = l.kind === 'beam' ? (m.axialMax >= -m.axialMin ? m.axialMax : m.axialMin) : m.axialMid
+        if (l.kind !== 'bar' || lc.weightPerMm) linkMoments[l.name] = m.moment
+      })
+      const vw = before && after ? virtualWorkTorque(model, before, after, lc) : null
+      const scale = vw ? Math.max(Math.abs(cs.torque), Math.abs(vw.torque), vw.scale) : 0
+      cases[i].samples.push({
+        position: {
+          crankDeg,
+          tracer: { ...joints.T },
+          joints,
+          linkForces,
+          pinForces: pinForces(model, cs),
+          reactions: groundReactions(model, cs),
+          driveTorque: cs.torque,
+          linkMoments,
+          transmissionAngleDeg: minAngle,
+          transmissionAngles: angles,
+        },
+        members,
+        residual: equilibriumResidual(model, pts, lc, cs),
+        vwTorque: vw ? vw.torque : cs.torque,
+        vwError: scale > 0 && vw ? Math.abs(cs.torque - vw.torque) / scale : 0,
+      })
+    })
+  }
+  return { model, cases, toggles }
+}
