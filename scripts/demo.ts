@@ -17,7 +17,10 @@ const run = (args: string[]) => {
 run(['--import', 'tsx', 'scripts/setup-db.ts'])
 await startFakeMailServer({ port: Number(process.env.SMTP_PORT || 2525), dir: mailDir() })
 console.log('fake mail server listening on 127.0.0.1:2525')
-if (process.env.SKIP_BUILD !== '1') run(['node_modules/next/dist/bin/next', 'build'])
+if (process.env.SKIP_BUILD !== '1') {
+  run(['scripts/build-reports.mjs'])
+  run(['node_modules/next/dist/bin/next', 'build'])
+}
 const app = spawn(process.execPath, ['node_modules/next/dist/bin/next', 'start', '-p', port], { stdio: 'inherit', env })
 console.log(`\nInverso: open http://localhost:${port} and sign in with a demo account (see README).\n`)
 for (const sig of ['SIGINT', 'SIGTERM'] as const) process.on(sig, () => app.kill(sig))

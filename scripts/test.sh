@@ -14,5 +14,5 @@ fi
 export NODE_ENV=test
 npx vitest run
 unset NODE_ENV
-npx next build >/tmp/inverso-build.log 2>&1 || { tail -50 /tmp/inverso-build.log; exit 1; }
+npm run build >/tmp/inverso-build.log 2>&1 || { tail -50 /tmp/inverso-build.log; exit 1; }
 npx playwright test

@@ -61,3 +61,23 @@ export function projectAction<S extends z.ZodType>(
     }
   }
 }
+
+/**
+ * The same guard for actions called with data rather than a form (the calc inputs editor):
+ * authenticates, checks the permission in `projectId`, runs `fn`; typed errors become field messages.
+ */
+export function projectDataAction<A extends unknown[]>(
+  permission: Permission,
+  fn: (ctx: ActionContext, ...args: A) => Promise<ActionState | void>,
+) {
+  return async (projectId: string, ...args: A): Promise<ActionState> => {
+    try {
+      const user = await requireUser()
+      const actor = await getActor(user, projectId)
+      if (!can(actor, permission)) return { message: 'Your role in this project does not allow this.' }
+      return (await fn({ user, actor, projectId }, ...args)) ?? { ok: true }
+    } catch (err) {
+      return errorState(err)
+    }
+  }
+}

@@ -1,7 +1,8 @@
 import type { Material } from './materials'
 
-export const GENERAL_CAUTION =
-  'This calculation supports, but does not replace, a competent engineer: the engineer who signs the package is responsible for the model, the loads and the result. Local codes, the national annex in force and licensed practice govern over anything here.'
+import { GENERAL_CAUTION } from '@/lib/cautions'
+
+export { GENERAL_CAUTION }
 
 export const FROM_MEMORY_CAUTION =
   'Some material values or clause details are marked "from memory": they were not checked against a copy of the source when this library was written. Verify them against the standard before issuing the package.'

@@ -1,19 +1,37 @@
 import type { Metadata } from 'next'
 import Link from 'next/link'
 import { notFound } from 'next/navigation'
+import 'katex/dist/katex.min.css'
+import '@/reports/web/report.css'
 import { StateBadge } from '@/app/_components/state-badge'
 import { loadProjectContext } from '@/app/_lib/project-context'
+import { reports } from '@/app/_lib/renderer'
 import { getCalc, listRevisions } from '@/db/queries'
+import { draftReportPackage, loadReportPackage } from '@/db/report-package'
+import { defaultCalcInputs } from '@/lib/calc/defaults'
+import { MATERIALS } from '@/lib/checks'
+import { can } from '@/lib/review/permissions'
 import { CALC_TYPE_LABELS } from '@/lib/schemas/project'
+import { InputsForm } from './inputs-form'
+import { RevisionsPanel } from './revisions-panel'
 
 export const metadata: Metadata = { title: 'Calc' }
 
-export default async function CalcPage({ params }: { params: Promise<{ projectId: string; calcId: string }> }) {
-  const { projectId, calcId } = await params
-  const { project } = await loadProjectContext(projectId)
+type Props = { params: Promise<{ projectId: string; calcId: string }>; searchParams: Promise<{ view?: string }> }
+
+export default async function CalcPage({ params, searchParams }: Props) {
+  const [{ projectId, calcId }, { view }] = await Promise.all([params, searchParams])
+  const { project, actor } = await loadProjectContext(projectId)
   const calc = await getCalc(projectId, calcId)
   if (!calc) notFound()
   const revisions = await listRevisions(calcId)
+  const shown = view === 'working' || revisions.length === 0 ? null : (revisions.find((r) => r.id === view) ?? revisions[0])
+  if (view && view !== 'working' && !revisions.some((r) => r.id === view)) notFound()
+
+  const pkg = shown ? await loadReportPackage(shown.id) : await draftReportPackage(project, calc)
+  const html = 'fieldErrors' in pkg ? null : await (await reports()).renderWebHtml(pkg)
+  const base = `/projects/${projectId}/calcs/${calcId}`
+
   return (
     <div className="flex flex-col gap-4">
       <div>
@@ -27,20 +45,46 @@ export default async function CalcPage({ params }: { params: Promise<{ projectId
           {CALC_TYPE_LABELS[calc.calcType]} <StateBadge state={calc.state} />
         </div>
       </div>
-      <section className="panel p-4">
-        <h2 className="h2">Revisions</h2>
-        {revisions.length === 0 ? (
-          <p className="mt-2 text-ink/60">No revision saved yet.</p>
-        ) : (
-          <ul className="mt-2">
+      <div className="grid items-start gap-4 lg:grid-cols-[24rem_1fr]">
+        <div className="flex flex-col gap-4">
+          <RevisionsPanel
+            projectId={projectId}
+            calcId={calcId}
+            shownId={shown?.id ?? null}
+            canSave={can(actor, 'calc.submit')}
+            allowed={{ check: can(actor, 'calc.check'), approve: can(actor, 'calc.approve'), issue: can(actor, 'calc.issue') }}
+            revisions={revisions.map((r) => ({ id: r.id, label: r.label, state: r.state, contentHash: r.contentHash, pdfHash: r.pdfHash, createdAt: r.createdAt.toISOString() }))}
+          />
+          <InputsForm
+            key={calc.updatedAt.getTime()}
+            projectId={projectId}
+            calcId={calcId}
+            calcType={calc.calcType}
+            initial={(calc.draftInputs ?? defaultCalcInputs(calc.calcType)) as Parameters<typeof InputsForm>[0]['initial']}
+            materials={Object.keys(MATERIALS)}
+            editable={can(actor, 'calc.edit')}
+          />
+        </div>
+        <section className="panel min-w-0 p-0" aria-label="Calc package">
+          <nav className="flex flex-wrap gap-1 border-b border-rule px-3 py-2 text-xs">
+            <Link href={`${base}?view=working`} className={`rounded px-2 py-1 ${shown ? 'hover:bg-paper' : 'bg-accent text-white'}`}>
+              Working copy
+            </Link>
             {revisions.map((r) => (
-              <li key={r.id} className="flex gap-3">
-                <span className="font-mono">{r.label}</span> <StateBadge state={r.state} />
-              </li>
+              <Link key={r.id} href={`${base}?view=${r.id}`} className={`rounded px-2 py-1 ${shown?.id === r.id ? 'bg-accent text-white' : 'hover:bg-paper'}`}>
+                Rev {r.label}
+              </Link>
             ))}
-          </ul>
-        )}
-      </section>
+          </nav>
+          {html ? (
+            <div className="inverso-report px-6 py-4" dangerouslySetInnerHTML={{ __html: html }} />
+          ) : (
+            <p role="alert" className="m-4 rounded bg-fail-soft p-3 text-fail">
+              The working inputs have errors; fix them in the form to see the package.
+            </p>
+          )}
+        </section>
+      </div>
     </div>
   )
 }

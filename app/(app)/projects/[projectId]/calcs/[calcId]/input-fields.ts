@@ -1,0 +1,81 @@
+import type { CalcType } from '@/lib/schemas/project'
+
+export interface InputFieldDef {
+  path: string
+  label: string
+  unit?: string
+  hint?: string
+  step?: string
+  options?: readonly { value: string; label: string }[]
+}
+
+/** The editor's fields as data: path in the calc input JSON, label, unit. */
+export const GEOMETRY_FIELDS: Record<CalcType, InputFieldDef[]> = {
+  peaucellier: [
+    { path: 'geometry.arm', label: 'Arm l', unit: 'mm', hint: 'pole O to rhombus vertices A and B' },
+    { path: 'geometry.side', label: 'Rhombus side s', unit: 'mm' },
+    { path: 'geometry.crank', label: 'Crank r', unit: 'mm' },
+    { path: 'geometry.crankPivotOffset', label: 'Crank pivot offset e', unit: 'mm', hint: 'e = r gives the straight line' },
+  ],
+  hart: [
+    { path: 'geometry.long', label: 'Long links a', unit: 'mm' },
+    { path: 'geometry.short', label: 'Short links b', unit: 'mm' },
+    { path: 'geometry.ratio', label: 'Ratio μ', unit: '—', step: '0.01', hint: 'places pole, driven point and tracer' },
+    { path: 'geometry.crank', label: 'Crank r', unit: 'mm' },
+    { path: 'geometry.crankPivotOffset', label: 'Crank pivot offset e', unit: 'mm', hint: 'e = r gives the straight line' },
+  ],
+}
+
+export const STROKE_FIELDS: InputFieldDef[] = [
+  { path: 'toggleMarginDeg', label: 'Margin from toggle', unit: '°', hint: 'crank angle kept away from each locked position' },
+]
+
+export const BASIS_OPTIONS = [
+  { value: 'en1993', label: 'EN 1993-1-8 §3.13 / EN 1993-1-1' },
+  { value: 'aisc360', label: 'AISC 360-16 §D5, §J7' },
+  { value: 'allowable', label: 'Allowable stress (factor of safety)' },
+] as const
+
+export const BASIS_FIELDS: Record<string, InputFieldDef[]> = {
+  en1993: [
+    { path: 'basis.gammaM0', label: 'γM0', step: '0.01' },
+    { path: 'basis.gammaM1', label: 'γM1', step: '0.01' },
+    { path: 'basis.gammaM2', label: 'γM2', step: '0.01' },
+    { path: 'basis.gammaM6ser', label: 'γM6,ser', step: '0.01' },
+  ],
+  aisc360: [{ path: 'basis.method', label: 'Method', options: [{ value: 'LRFD', label: 'LRFD' }, { value: 'ASD', label: 'ASD' }] }],
+  allowable: [{ path: 'basis.factorOfSafety', label: 'Factor of safety', step: '0.1' }],
+}
+
+export const FACTOR_FIELDS: InputFieldDef[] = [
+  { path: 'factors.load', label: 'Load factor', step: '0.05' },
+  { path: 'factors.dynamic', label: 'Dynamic factor', step: '0.05' },
+]
+
+export function materialOptions(ids: readonly string[]) {
+  return ids.map((id) => ({ value: id, label: id }))
+}
+
+export const PIN_FIELDS = (materials: readonly string[]): InputFieldDef[] => [
+  { path: 'defaults.joint.pinDiameter', label: 'Pin diameter d', unit: 'mm', step: '0.1' },
+  { path: 'defaults.joint.holeDiameter', label: 'Hole diameter d₀', unit: 'mm', step: '0.1' },
+  { path: 'defaults.joint.pinMaterial', label: 'Pin material', options: materialOptions(materials) },
+  {
+    path: 'defaults.joint.arrangement',
+    label: 'Arrangement',
+    options: [
+      { value: 'double', label: 'Double shear (fork)' },
+      { value: 'single', label: 'Single shear (lapped)' },
+    ],
+  },
+  { path: 'defaults.joint.middle.thickness', label: 'Middle plate t', unit: 'mm', step: '0.1' },
+  { path: 'defaults.joint.outer.thickness', label: 'Outer plates t', unit: 'mm', step: '0.1' },
+  { path: 'defaults.joint.gap', label: 'Gap c', unit: 'mm', step: '0.1' },
+  { path: 'defaults.joint.middle.material', label: 'Plate material', options: materialOptions(materials) },
+]
+
+export const LINK_FIELDS = (materials: readonly string[]): InputFieldDef[] => [
+  { path: 'defaults.link.section.width', label: 'Flat bar width', unit: 'mm', step: '0.5' },
+  { path: 'defaults.link.section.thickness', label: 'Flat bar thickness', unit: 'mm', step: '0.5' },
+  { path: 'defaults.link.material', label: 'Link material', options: materialOptions(materials) },
+]

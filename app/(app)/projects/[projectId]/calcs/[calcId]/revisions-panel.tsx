@@ -1,0 +1,109 @@
+'use client'
+
+import { useRouter } from 'next/navigation'
+import { useState, useTransition } from 'react'
+import { StateBadge } from '@/app/_components/state-badge'
+import type { ActionState } from '@/app/_lib/action'
+import type { RevisionState } from '@/lib/review/roles'
+import { approveRevisionAction, checkRevisionAction, issueRevisionAction, saveRevisionAction } from './actions'
+
+interface RevisionRow {
+  id: string
+  label: string
+  state: RevisionState
+  contentHash: string | null
+  pdfHash: string | null
+  createdAt: string
+}
+
+type Step = 'check' | 'approve' | 'issue'
+const NEXT_STEP: Partial<Record<RevisionState, { step: Step; label: string }>> = {
+  'in-check': { step: 'check', label: 'Mark as checked' },
+  checked: { step: 'approve', label: 'Approve' },
+  approved: { step: 'issue', label: 'Issue' },
+}
+const ACTIONS = { check: checkRevisionAction, approve: approveRevisionAction, issue: issueRevisionAction }
+
+export function RevisionsPanel(props: {
+  projectId: string
+  calcId: string
+  shownId: string | null
+  canSave: boolean
+  allowed: Record<Step, boolean>
+  revisions: RevisionRow[]
+}) {
+  const { projectId, calcId, revisions, allowed } = props
+  const router = useRouter()
+  const [state, setState] = useState<ActionState>({})
+  const [pending, start] = useTransition()
+  const run = (fn: () => Promise<ActionState>) =>
+    start(async () => {
+      const result = await fn()
+      setState(result)
+      if (result.ok) router.refresh()
+    })
+  const pdf = (id: string, paper: string) => `/api/projects/${projectId}/calcs/${calcId}/revisions/${id}/pdf?paper=${paper}`
+
+  return (
+    <section className="panel flex flex-col gap-3 p-4" data-testid="revisions">
+      <div className="flex items-center justify-between">
+        <h2 className="h2">Revisions</h2>
+        {props.canSave && (
+          <button type="button" className="btn" disabled={pending} onClick={() => run(() => saveRevisionAction(projectId, calcId))}>
+            {pending ? 'Working…' : 'Save revision for check'}
+          </button>
+        )}
+      </div>
+      {state.message && (
+        <div role="alert" className={`rounded px-3 py-2 text-sm ${state.ok ? 'bg-accent-soft text-accent' : 'bg-fail-soft text-fail'}`}>
+          {state.message}
+          {state.fieldErrors && (
+            <ul className="mt-1 list-disc pl-4 text-xs">
+              {Object.entries(state.fieldErrors).map(([k, v]) => (
+                <li key={k}>
+                  <span className="font-mono">{k}</span>: {v}
+                </li>
+              ))}
+            </ul>
+          )}
+        </div>
+      )}
+      {revisions.length === 0 && <p className="text-ink/60">No revision yet. Save one when the working copy is ready for check.</p>}
+      <ul className="flex flex-col divide-y divide-rule">
+        {revisions.map((r) => {
+          const next = NEXT_STEP[r.state]
+          return (
+            <li key={r.id} className="flex flex-col gap-1 py-2">
+              <div className="flex items-center gap-2">
+                <span className="font-mono font-semibold">Rev {r.label}</span>
+                <StateBadge state={r.state} />
+                <span className="ml-auto text-xs text-ink/60">{r.createdAt.slice(0, 10)}</span>
+              </div>
+              <div className="font-mono text-[10px] text-ink/50" title="SHA-256 of canonical inputs + result / of the stored PDF">
+                content {r.contentHash?.slice(0, 16)}… · pdf {r.pdfHash?.slice(0, 16)}…
+              </div>
+              <div className="flex flex-wrap items-center gap-2">
+                <a className="text-xs text-accent underline" href={pdf(r.id, 'A4')}>
+                  PDF (A4)
+                </a>
+                <a className="text-xs text-accent underline" href={pdf(r.id, 'LETTER')}>
+                  PDF (US Letter)
+                </a>
+                {next && allowed[next.step] && (
+                  <button
+                    type="button"
+                    className="btn-quiet ml-auto"
+                    disabled={pending}
+                    onClick={() => run(() => ACTIONS[next.step](projectId, calcId, r.id))}
+                  >
+                    {next.label}
+                  </button>
+                )}
+              </div>
+            </li>
+          )
+        })}
+      </ul>
+    </section>
+  )
+}

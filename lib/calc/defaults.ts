@@ -1,0 +1,32 @@
+import type { CalcType } from '@/lib/schemas/project'
+
+/**
+ * Starting inputs for a new calc: a feasible cell with one load case and a complete pin and link
+ * description, so the first run gives a full package. The engineer changes what differs.
+ */
+export function defaultCalcInputs(calcType: CalcType): Record<string, unknown> {
+  const geometry =
+    calcType === 'peaucellier'
+      ? { arm: 250, side: 100, crank: 70, crankPivotOffset: 70 }
+      : { long: 240, short: 100, ratio: 0.3, crank: 40, crankPivotOffset: 40 }
+  return {
+    mechanism: calcType,
+    geometry,
+    loads: [{ name: 'Working load', fx: 0, fy: -150 }],
+    toggleMarginDeg: 5,
+    basis: { kind: 'en1993', gammaM0: 1.0, gammaM1: 1.0, gammaM2: 1.25, gammaM6ser: 1.0 },
+    factors: { load: 1.5, dynamic: 1.2 },
+    defaults: {
+      joint: {
+        pinDiameter: 10,
+        holeDiameter: 10.5,
+        pinMaterial: 'C45+QT',
+        arrangement: 'double',
+        middle: { thickness: 8, material: 'S355' },
+        outer: { thickness: 5, material: 'S355' },
+        gap: 1,
+      },
+      link: { section: { shape: 'flat', width: 25, thickness: 8 }, material: 'S355' },
+    },
+  }
+}

@@ -1,0 +1,73 @@
+import { checksInputSchema, ChecksInputError, runChecks, type ChecksInput } from '@/lib/checks'
+import { fieldErrorsOf } from '@/lib/schemas/field-errors'
+import { GENERAL_CAUTION } from '@/lib/cautions'
+import { mechanismInputSchema, runMechanism, type MechanismInput } from './mechanism'
+import type { CheckItem, MechanismResult } from './types'
+
+/** A linkage calc: the mechanism and its loads, plus the pin and link descriptions and the design basis. */
+export interface CalcInput {
+  mechanism: MechanismInput
+  checks: ChecksInput | null
+}
+
+export interface CalcVerdict {
+  pass: boolean
+  maxUtilisation: number
+  governing: string
+}
+
+export type CalcResult = MechanismResult & { checks: CheckItem[]; cautions: string[]; verdict: CalcVerdict }
+
+export type ParsedCalcInput = { ok: true; input: CalcInput } | { ok: false; fieldErrors: Record<string, string> }
+
+/**
+ * Reads one JSON object holding both parts (the keys of docs/engine.md and docs/checks.md side by side).
+ * A missing `basis` means "kinematics and forces only". Errors are keyed by dotted field path.
+ */
+export function parseCalcInput(raw: unknown): ParsedCalcInput {
+  const mech = mechanismInputSchema.safeParse(raw)
+  const hasBasis = typeof raw === 'object' && raw !== null && 'basis' in raw
+  const checks = hasBasis ? checksInputSchema.safeParse(raw) : null
+  const fieldErrors = {
+    ...(mech.success ? {} : fieldErrorsOf(mech.error)),
+    ...(checks && !checks.success ? fieldErrorsOf(checks.error) : {}),
+  }
+  if (!mech.success || (checks && !checks.success)) return { ok: false, fieldErrors }
+  return { ok: true, input: { mechanism: raw as MechanismInput, checks: checks?.data ?? null } }
+}
+
+function verdictOf(result: MechanismResult, checks: CheckItem[]): CalcVerdict {
+  if (!result.feasibility.ok) return { pass: false, maxUtilisation: 0, governing: result.feasibility.message }
+  const worst = checks.reduce<CheckItem | null>((w, c) => (!w || c.utilisation > w.utilisation ? c : w), null)
+  if (!worst) return { pass: true, maxUtilisation: 0, governing: 'no component checks requested' }
+  return {
+    pass: checks.every((c) => c.pass),
+    maxUtilisation: worst.utilisation,
+    governing: `${worst.component} — ${worst.check} (${worst.clause})`,
+  }
+}
+
+/**
+ * Runs the mechanism, then the checks on its force envelope. Bad component descriptions come back
+ * as field errors (`joints.P.holeDiameter`), not as exceptions.
+ */
+export function runCalc(input: CalcInput): { ok: true; result: CalcResult } | { ok: false; fieldErrors: Record<string, string> } {
+  const mech = runMechanism(input.mechanism)
+  let checks: CheckItem[] = []
+  let cautions = [GENERAL_CAUTION]
+  const steps = [...mech.steps]
+  const tables = [...mech.tables]
+  if (input.checks && mech.feasibility.ok && mech.envelope.length > 0) {
+    try {
+      const c = runChecks(input.checks, mech.envelope)
+      checks = c.checks
+      steps.push(...c.steps)
+      tables.push(...c.tables)
+      cautions = [...new Set([GENERAL_CAUTION, ...c.cautions])]
+    } catch (err) {
+      if (err instanceof ChecksInputError) return { ok: false, fieldErrors: Object.fromEntries(err.issues.map((i) => [i.path, i.message])) }
+      throw err
+    }
+  }
+  return { ok: true, result: { ...mech, steps, tables, checks, cautions, verdict: verdictOf(mech, checks) } }
+}
