@@ -8,7 +8,7 @@ import { ENGINE_VERSION } from './version'
  * revisions use them). Lengths mm, forces N, angles degrees. Numbers arrive as
  * JSON numbers here; form layers coerce strings before parsing.
  */
-const num = () => z.number({ error: 'must be a number' })
+const num = () => z.number({ error: (iss) => (iss.input === undefined ? 'is required' : 'must be a number') })
 const positive = () => num().positive({ error: 'must be positive' })
 const nonNegative = () => num().nonnegative({ error: 'must not be negative' })
 
