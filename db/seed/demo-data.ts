@@ -17,6 +17,17 @@ export const DEMO_PROJECT = {
   client: 'Feldmark Maschinenbau (internal)',
 }
 
+const PINS = {
+  pinDiameter: 10,
+  holeDiameter: 10.5,
+  pinMaterial: 'C45+QT',
+  arrangement: 'double',
+  middle: { thickness: 8, material: 'S355' },
+  outer: { thickness: 5, material: 'S355' },
+  gap: 1,
+}
+const LINKS = { section: { shape: 'flat', width: 25, thickness: 8 }, material: 'S355', eye: { edgeAlong: 16 } }
+
 export const DEMO_CALCS = [
   {
     number: 'LC-001',
@@ -25,11 +36,15 @@ export const DEMO_CALCS = [
     state: 'issued',
     inputs: {
       mechanism: 'peaucellier',
-      geometry: { arm: 250, side: 100, crank: 70, crankPivotOffset: 70 },
+      geometry: { arm: 250, side: 100, crank: 100, crankPivotOffset: 100 },
       loads: [
         { name: 'Pushing carton flap', fx: 0, fy: -180 },
         { name: 'Jam at end of stroke', fx: 120, fy: -420 },
       ],
+      toggleMarginDeg: 5,
+      basis: { kind: 'en1993', gammaM0: 1.0, gammaM1: 1.0, gammaM2: 1.25, gammaM6ser: 1.0 },
+      factors: { load: 1.5, dynamic: 1.2 },
+      defaults: { joint: PINS, link: LINKS },
     },
   },
   {
@@ -41,6 +56,9 @@ export const DEMO_CALCS = [
       mechanism: 'hart',
       geometry: { long: 240, short: 100, ratio: 0.3, crank: 40, crankPivotOffset: 40 },
       loads: [{ name: 'Glue head weight and nozzle reaction', fx: 0, fy: -95 }],
+      basis: { kind: 'aisc360', method: 'LRFD' },
+      factors: { load: 1.6, dynamic: 1.1 },
+      defaults: { joint: { ...PINS, holeDiameter: 10.7 }, link: { ...LINKS, eye: { edgeAlong: 30, width: 40 } } },
     },
   },
   {
@@ -50,8 +68,11 @@ export const DEMO_CALCS = [
     state: 'draft',
     inputs: {
       mechanism: 'peaucellier',
-      geometry: { arm: 200, side: 80, crank: 60, crankPivotOffset: 60 },
+      geometry: { arm: 200, side: 80, crank: 75, crankPivotOffset: 75 },
       loads: [{ name: 'Folding a flap', fx: 0, fy: -140 }],
+      basis: { kind: 'allowable', factorOfSafety: 2.5 },
+      factors: { load: 1, dynamic: 1.3 },
+      defaults: { joint: { ...PINS, pinDiameter: 8, holeDiameter: 8.4 }, link: { ...LINKS, section: { shape: 'flat', width: 20, thickness: 6 } } },
     },
   },
 ] as const

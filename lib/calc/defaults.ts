@@ -7,7 +7,7 @@ import type { CalcType } from '@/lib/schemas/project'
 export function defaultCalcInputs(calcType: CalcType): Record<string, unknown> {
   const geometry =
     calcType === 'peaucellier'
-      ? { arm: 250, side: 100, crank: 70, crankPivotOffset: 70 }
+      ? { arm: 250, side: 100, crank: 100, crankPivotOffset: 100 }
       : { long: 240, short: 100, ratio: 0.3, crank: 40, crankPivotOffset: 40 }
   return {
     mechanism: calcType,
@@ -26,7 +26,7 @@ export function defaultCalcInputs(calcType: CalcType): Record<string, unknown> {
         outer: { thickness: 5, material: 'S355' },
         gap: 1,
       },
-      link: { section: { shape: 'flat', width: 25, thickness: 8 }, material: 'S355' },
+      link: { section: { shape: 'flat', width: 25, thickness: 8 }, material: 'S355', eye: { edgeAlong: 16 } },
     },
   }
 }
