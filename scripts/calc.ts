@@ -1,15 +1,21 @@
 /**
  * `npm run calc -- input.json`: prints the calc result as JSON on stdout.
- * Kept thin on purpose: read, parse, run, print. Bad input exits 1 with one line.
+ * An input with `mechanism` runs the linkage (and the pin/link checks when it has a `basis`);
+ * one without checks a single component with its force given directly (docs/checks.md).
+ * Bad input exits 1 with one line naming the field.
  */
 import { readFileSync } from 'node:fs'
-import { ZodError } from 'zod'
-import { formatZodError } from '@/lib/calc/format-zod-error'
-import { mechanismInputSchema, runMechanism } from '@/lib/calc/mechanism'
+import { checksInUnits, runChecksCli } from '@/lib/checks'
+import { parseCalcInput, runCalc } from '@/lib/calc/run'
 
 function fail(message: string): never {
   process.stderr.write(`${message}\n`)
   process.exit(1)
+}
+
+const firstError = (errors: Record<string, string> | { path: string; message: string }[]) => {
+  const [path, message] = Array.isArray(errors) ? [errors[0]?.path, errors[0]?.message] : (Object.entries(errors)[0] ?? [])
+  return `error: ${path || '(input)'}: ${message ?? 'invalid input'}`
 }
 
 const file = process.argv[2]
@@ -20,10 +26,18 @@ try {
 } catch (e) {
   fail(`error: ${file}: ${e instanceof Error ? e.message.split('\n')[0] : 'cannot read'}`)
 }
-const parsed = mechanismInputSchema.safeParse(json)
-if (!parsed.success) fail(formatZodError(parsed.error))
-try {
-  process.stdout.write(`${JSON.stringify(runMechanism(parsed.data), null, 2)}\n`)
-} catch (e) {
-  fail(e instanceof ZodError ? formatZodError(e) : `error: ${e instanceof Error ? e.message : String(e)}`)
+
+let output: unknown
+if (typeof json === 'object' && json !== null && !('mechanism' in json)) {
+  const r = runChecksCli(json)
+  if (!r.ok) fail(firstError(r.issues))
+  output = { units: r.units, ...r.result }
+} else {
+  const parsed = parseCalcInput(json)
+  if (!parsed.ok) fail(firstError(parsed.fieldErrors))
+  const run = runCalc(parsed.input)
+  if (!run.ok) fail(firstError(run.fieldErrors))
+  const units = parsed.input.checks?.units ?? 'SI'
+  output = { ...run.result, checks: checksInUnits(run.result.checks, units) }
 }
+process.stdout.write(`${JSON.stringify(output, null, 2)}\n`)

@@ -1,5 +1,8 @@
 import { describe, it, expect } from 'vitest'
 import { execFileSync, spawnSync } from 'node:child_process'
+import { mkdtempSync, writeFileSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import path from 'node:path'
 import { ZodError } from 'zod'
 import { mechanismInputSchema, runMechanism } from '@/lib/calc/mechanism'
 import { formatZodError } from '@/lib/calc/format-zod-error'
@@ -61,7 +64,9 @@ describe('CLI', () => {
   it('prints JSON for a good file and one error line for a bad one', () => {
     const out = JSON.parse(execFileSync('npx', ['tsx', 'scripts/calc.ts', 'examples/hart.json'], { encoding: 'utf8' }))
     expect(out.mechanism).toBe('hart')
-    const bad = spawnSync('npx', ['tsx', 'scripts/calc.ts', 'package.json'], { encoding: 'utf8' })
+    const file = path.join(mkdtempSync(path.join(tmpdir(), 'calc-')), 'bad.json')
+    writeFileSync(file, JSON.stringify({ mechanism: 'slider', geometry: {}, loads: [] }))
+    const bad = spawnSync('npx', ['tsx', 'scripts/calc.ts', file], { encoding: 'utf8' })
     expect(bad.status).toBe(1)
     expect(bad.stderr.trim()).toBe('error: mechanism: must be "peaucellier" or "hart"')
   })
