@@ -7,6 +7,7 @@ import type { RevisionState } from '@/lib/review/roles'
 import type { FileStore } from '@/lib/storage'
 import { canonicalJson, sha256Hex } from '@/reports/hash'
 import type { Paper, ReportPackage } from '@/reports/types'
+import { attachmentBytes, attachPendingTo } from './attachments'
 import { audit } from './audit'
 import { db } from './index'
 import { loadReportPackage, TEMPLATE_VERSION } from './report-package'
@@ -35,7 +36,8 @@ export function nextRevisionLabel(count: number): string {
 
 /** Renders the revision's PDF as it stands now and stores it under its hash. */
 export async function renderAndStorePdf(revisionId: string, deps: RevisionDeps, paper: Paper = 'A4', asState?: RevisionState) {
-  const bytes = await deps.renderer.renderPdf(await loadReportPackage(revisionId, paper, asState))
+  const pkg = await loadReportPackage(revisionId, paper, asState)
+  const bytes = await deps.renderer.renderPdf({ ...pkg, attachments: await attachmentBytes(revisionId, deps.store) })
   const pdfHash = sha256Hex(bytes)
   const pdfKey = `pdf/${pdfHash}.pdf`
   await deps.store.put(pdfKey, bytes)
@@ -77,6 +79,7 @@ export async function saveRevision(calc: Calc, userId: string, deps: RevisionDep
   // A newer revision replaces any older one still in progress; issued ones stay until the new one is issued.
   const open = existing.filter((r) => r.state !== 'issued' && r.state !== 'superseded').map((r) => r.id)
   if (open.length) await db.update(revisions).set({ state: 'superseded' }).where(inArray(revisions.id, open))
+  await attachPendingTo(calc.id, id)
   const pdf = await renderAndStorePdf(id, deps)
   await db.update(revisions).set({ pdfKey: pdf.pdfKey, pdfHash: pdf.pdfHash }).where(eq(revisions.id, id))
   await db.update(calcs).set({ state: 'in-check', updatedAt: frozenAt }).where(eq(calcs.id, calc.id))

@@ -35,6 +35,8 @@ export interface ActionContext {
   user: SessionUser
   actor: Actor
   projectId: string
+  /** The raw form, for what a schema over strings cannot carry (uploaded files). */
+  formData?: FormData
 }
 
 /**
@@ -55,7 +57,7 @@ export function projectAction<S extends z.ZodType>(
       if (!can(actor, permission)) return { message: 'Your role in this project does not allow this.', values }
       const parsed = schema.safeParse(values)
       if (!parsed.success) return { fieldErrors: fieldErrorsOf(parsed.error), values, message: 'Check the marked fields.' }
-      return (await fn(parsed.data, { user, actor, projectId })) ?? { ok: true }
+      return (await fn(parsed.data, { user, actor, projectId, formData: fd })) ?? { ok: true }
     } catch (err) {
       return errorState(err, values)
     }

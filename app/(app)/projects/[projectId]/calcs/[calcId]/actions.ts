@@ -1,7 +1,10 @@
 'use server'
 
 import { revalidatePath } from 'next/cache'
-import { projectDataAction } from '@/app/_lib/action'
+import { z } from 'zod'
+import { projectAction, projectDataAction } from '@/app/_lib/action'
+import { addAttachment } from '@/db/attachments'
+import { localFileStore } from '@/lib/storage'
 import { rendererDeps } from '@/app/_lib/renderer'
 import { getCalc } from '@/db/queries'
 import { saveDraftInputs } from '@/db/calc-drafts'
@@ -41,3 +44,11 @@ function transitionAction(step: keyof typeof TRANSITIONS) {
 export const checkRevisionAction = transitionAction('check')
 export const approveRevisionAction = transitionAction('approve')
 export const issueRevisionAction = transitionAction('issue')
+
+export const addAttachmentAction = projectAction('calc.edit', z.object({ calcId: z.string().min(1) }), async ({ calcId }, { projectId, user, formData }) => {
+  const file = formData?.get('file')
+  if (!(file instanceof File) || file.size === 0) return { fieldErrors: { file: 'Choose a PDF file.' } }
+  await addAttachment(await calcOf(projectId, calcId), { name: file.name, bytes: new Uint8Array(await file.arrayBuffer()) }, user.id, localFileStore())
+  revalidatePath(`/projects/${projectId}/calcs/${calcId}`)
+  return { ok: true, message: `${file.name} will be appended to the next revision.` }
+})

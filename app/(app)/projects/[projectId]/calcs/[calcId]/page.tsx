@@ -12,6 +12,8 @@ import { defaultCalcInputs } from '@/lib/calc/defaults'
 import { MATERIALS } from '@/lib/checks'
 import { can } from '@/lib/review/permissions'
 import { CALC_TYPE_LABELS } from '@/lib/schemas/project'
+import { pendingAttachments } from '@/db/attachments'
+import { AttachmentsForm } from './attachments-form'
 import { InputsForm } from './inputs-form'
 import { RevisionsPanel } from './revisions-panel'
 
@@ -24,7 +26,7 @@ export default async function CalcPage({ params, searchParams }: Props) {
   const { project, actor } = await loadProjectContext(projectId)
   const calc = await getCalc(projectId, calcId)
   if (!calc) notFound()
-  const revisions = await listRevisions(calcId)
+  const [revisions, pending] = await Promise.all([listRevisions(calcId), pendingAttachments(calcId)])
   const shown = view === 'working' || revisions.length === 0 ? null : (revisions.find((r) => r.id === view) ?? revisions[0])
   if (view && view !== 'working' && !revisions.some((r) => r.id === view)) notFound()
 
@@ -64,6 +66,7 @@ export default async function CalcPage({ params, searchParams }: Props) {
             materials={Object.keys(MATERIALS)}
             editable={can(actor, 'calc.edit')}
           />
+          {can(actor, 'calc.edit') && <AttachmentsForm projectId={projectId} calcId={calcId} pending={pending.map((a) => ({ id: a.id, name: a.name, size: a.size }))} />}
         </div>
         <section className="panel min-w-0 p-0" aria-label="Calc package">
           <nav className="flex flex-wrap gap-1 border-b border-rule px-3 py-2 text-xs">
