@@ -1,0 +1,12 @@
+/**
+ * The report pipeline: one MDX template per calc type, rendered either as a
+ * web page (HTML + KaTeX) or as a signed-off PDF (react-pdf + MathJax paths).
+ * Pure Node: no Next.js, no __dirname; templates and fonts resolve from
+ * `rootDir` (default `process.cwd()`).
+ */
+export { renderPdf } from './pdf/render'
+export { renderWebHtml, renderWebDocument } from './web/render'
+export { sha256Hex, canonicalJson } from './hash'
+export { formatValue, formatNumber, watermarkFor } from './model/format'
+export { CAUTION_BASE } from './model/views'
+export type * from './types'

@@ -1,0 +1,91 @@
+/**
+ * Everything a component needs besides its props, computed once per render:
+ * step numbers (identical in the web view and the PDF because both read them
+ * from here), section order and the template's front matter.
+ */
+import type { Step } from '../../lib/calc/types'
+import type { ReportPackage } from '../types'
+import { canonicalJson, sha256Hex } from '../hash'
+import type { Outline } from '../mdx/plugins'
+import { numberOutline, type Numbering } from './outline'
+
+export interface TemplateReference {
+  id: string
+  text: string
+}
+
+/** The front matter a template declares. */
+export interface TemplateMeta {
+  title: string
+  /** Step sections in the order the template places them; numbering follows it. */
+  stepSections: string[]
+  references: TemplateReference[]
+}
+
+export interface NumberedStep {
+  n: number
+  step: Step
+}
+
+export interface ReportContext {
+  pkg: ReportPackage
+  meta: TemplateMeta
+  bySection: Map<string, NumberedStep[]>
+  /** Sections the engine produced that the template does not place; shown under "Further steps". */
+  otherSections: string[]
+  numberOf: Map<string, number>
+  /** Width figures are drawn at, in points (the PDF's text width; the web scales it). */
+  figureWidth: number
+  /** Page count of each attachment, in order; the PDF counts them into "page n of N". */
+  appendixPages: number[]
+  /** SHA-256 of the canonical result JSON, printed on the cover. */
+  resultHash: string
+  numbering: Numbering
+}
+
+export function readMeta(frontmatter: Record<string, unknown>): TemplateMeta {
+  const list = (v: unknown): unknown[] => (Array.isArray(v) ? v : [])
+  return {
+    title: typeof frontmatter.title === 'string' ? frontmatter.title : '',
+    stepSections: list(frontmatter.stepSections).map(String),
+    references: list(frontmatter.references).flatMap((r) => {
+      if (!r || typeof r !== 'object') return []
+      const o = r as Record<string, unknown>
+      return [{ id: String(o.id ?? ''), text: String(o.text ?? '') }]
+    }),
+  }
+}
+
+export function buildContext(
+  pkg: ReportPackage,
+  meta: TemplateMeta,
+  outline: Outline,
+  extra: { figureWidth: number; appendixPages?: number[] },
+): ReportContext {
+  const grouped = new Map<string, Step[]>()
+  for (const step of pkg.result.steps) {
+    const list = grouped.get(step.section) ?? []
+    list.push(step)
+    grouped.set(step.section, list)
+  }
+  const placed = meta.stepSections.filter((s) => grouped.has(s))
+  const otherSections = [...grouped.keys()].filter((s) => !meta.stepSections.includes(s))
+  const bySection = new Map<string, NumberedStep[]>()
+  const numberOf = new Map<string, number>()
+  let n = 0
+  for (const section of [...placed, ...otherSections]) {
+    const numbered = (grouped.get(section) ?? []).map((step) => ({ n: ++n, step }))
+    bySection.set(section, numbered)
+    for (const s of numbered) numberOf.set(s.step.id, s.n)
+  }
+  return { pkg, meta, bySection, otherSections, numberOf, figureWidth: extra.figureWidth, appendixPages: extra.appendixPages ?? [], resultHash: sha256Hex(canonicalJson(pkg.result)), numbering: numberOutline(outline, pkg.result) }
+}
+
+/** Step anchors are shared by the web view, the PDF links and checker remarks. */
+export function stepAnchor(stepId: string): string {
+  return `step-${stepId}`
+}
+
+export function sectionAnchor(sectionId: string): string {
+  return `sec-${sectionId}`
+}

@@ -1,0 +1,45 @@
+/** Figure scenes and captions, shared by both renderings. */
+import type { ReportContext } from './context'
+import { mechanismScene, type DiagramAt } from './diagram'
+import { PLOT_TITLE, plotScene, type PlotKind } from './plots'
+import type { Scene } from './scene'
+import { utilisationScene } from './utilisation'
+
+export interface FigureView {
+  scene: Scene
+  label: string
+  caption: string
+}
+
+/** Null when the figure has no data or its section is left out; the caller then draws nothing. */
+function label(ctx: ReportContext, ordinal?: string): string | null {
+  if (ordinal === undefined) return 'Figure'
+  const n = ctx.numbering.figure[Number(ordinal)]
+  return n ? `Figure ${n}` : null
+}
+
+export function diagramFigure(ctx: ReportContext, at: string | undefined, caption: string | undefined, ordinal?: string): FigureView | null {
+  const name = label(ctx, ordinal)
+  if (!name) return null
+  const picks = (at ?? 'start,middle,end').split(',').map((x) => x.trim()).filter((x): x is DiagramAt => x === 'start' || x === 'middle' || x === 'end')
+  const scene = mechanismScene(ctx.pkg.result, picks.length ? picks : ['middle'], ctx.figureWidth)
+  if (!scene) return null
+  return { scene, label: name, caption: caption ?? 'The mechanism at the start, middle and end of the design stroke, drawn to scale. Dashed: the line the tracer should follow; blue: the tracer path over the solved positions.' }
+}
+
+export function plotFigure(ctx: ReportContext, kind: string, caption: string | undefined, ordinal?: string): FigureView | null {
+  const name = label(ctx, ordinal)
+  if (!name) return null
+  if (kind !== 'links' && kind !== 'pins' && kind !== 'torque') return null
+  const scene = plotScene(ctx.pkg.result, kind as PlotKind, ctx.figureWidth)
+  if (!scene) return null
+  return { scene, label: name, caption: caption ?? PLOT_TITLE[kind as PlotKind] }
+}
+
+export function utilisationFigure(ctx: ReportContext, caption: string | undefined, ordinal?: string): FigureView | null {
+  const name = label(ctx, ordinal)
+  if (!name) return null
+  const scene = utilisationScene(ctx.pkg.result.checks ?? [], ctx.figureWidth, ctx.numberOf)
+  if (!scene) return null
+  return { scene, label: name, caption: caption ?? 'Utilisation of every component check; numbers are step numbers.' }
+}

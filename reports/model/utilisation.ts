@@ -1,0 +1,32 @@
+/** Horizontal bars, one per check, in document order, with the limit u = 1 marked. */
+import { scaleLinear } from 'd3-scale'
+import type { CheckItem } from '../../lib/calc/types'
+import { formatUtilisation } from './format'
+import { FAIL, GRID, INK, MUTED, PASS, WARN, type Scene, type SceneItem, textWidth } from './scene'
+
+export function utilisationScene(checks: CheckItem[], width: number, numberOf: Map<string, number>): Scene | null {
+  if (checks.length === 0) return null
+  const labels = checks.map((c) => `${numberOf.get(c.stepId) ?? '—'}  ${c.component} · ${c.check}`)
+  const labelW = Math.min(width * 0.45, Math.max(...labels.map((l) => textWidth(l, 6.8))) + 8)
+  const rowH = 13
+  const top = 14
+  const maxU = Math.max(1.1, ...checks.map((c) => c.utilisation))
+  const x = scaleLinear().domain([0, maxU]).range([labelW, width - 30])
+  const items: SceneItem[] = []
+  const bottom = top + rowH * checks.length
+  for (const t of x.ticks(6)) {
+    items.push({ kind: 'line', x1: x(t), y1: top - 2, x2: x(t), y2: bottom, stroke: GRID, width: 0.5 })
+    items.push({ kind: 'text', x: x(t), y: bottom + 9, text: t.toFixed(1), size: 6, anchor: 'middle', fill: MUTED })
+  }
+  checks.forEach((c, i) => {
+    const yy = top + i * rowH
+    const colour = !c.pass ? FAIL : c.utilisation > 0.9 ? WARN : PASS
+    items.push({ kind: 'text', x: 0, y: yy + 8.6, text: labels[i], size: 6.8, fill: INK, bold: c.governing })
+    items.push({ kind: 'rect', x: x(0), y: yy + 2, w: Math.max(0.5, x(c.utilisation) - x(0)), h: rowH - 4, fill: colour })
+    items.push({ kind: 'text', x: x(c.utilisation) + 3, y: yy + 8.6, text: formatUtilisation(c.utilisation), size: 6.5, fill: INK })
+  })
+  items.push({ kind: 'line', x1: x(1), y1: top - 4, x2: x(1), y2: bottom + 2, stroke: FAIL, width: 1, dash: '3 2' })
+  items.push({ kind: 'text', x: x(1) + 3, y: 8, text: 'limit u = 1.0', size: 6.2, fill: FAIL })
+  items.push({ kind: 'text', x: labelW, y: bottom + 18, text: 'utilisation u = demand / capacity (bold: governing per component)', size: 6.2, fill: MUTED })
+  return { width, height: bottom + 22, items }
+}

@@ -1,0 +1,148 @@
+/**
+ * The PDF implementation of the template vocabulary. The MDX wrapper is where
+ * pages are made: it walks the template's top-level sections, drops the ones
+ * this package leaves empty, and starts a new <Page> unless a section says
+ * `page="continue"`.
+ */
+import { Children, Fragment, isValidElement, type ReactElement, type ReactNode } from 'react'
+import { Text, View } from '@react-pdf/renderer'
+import type { ReportComponentProps, ReportComponents } from '../components'
+import { backMatterSections } from '../model/back-matter'
+import { useReport } from '../model/react-context'
+import * as B from './blocks'
+import { PdfPage, SectionHead } from './frame'
+import { MathBlock } from './math'
+import { A, Code, Em, H2, H3, LI, MathInline, OL, P, Strong, UL } from './prose'
+import { PdfOtherSteps, PdfStep, PdfSteps } from './steps'
+import { C } from './styles'
+
+type SectionProps = ReportComponentProps['Section']
+
+/** Outside the wrapper (never in a template's top level) a section is just its body. */
+function Section({ children }: SectionProps) {
+  return <View>{children}</View>
+}
+function BackMatter() {
+  return null
+}
+
+function Appendices() {
+  const { pkg, appendixPages } = useReport()
+  return (
+    <View>
+      <Text style={{ marginBottom: 6 }}>The following documents are attached after this page, in this order.</Text>
+      {pkg.attachments.map((a, i) => (
+        <View key={i} style={{ flexDirection: 'row', marginBottom: 2 }}>
+          <Text style={{ width: 70, fontWeight: 700 }}>{`Appendix ${String.fromCharCode(65 + i)}`}</Text>
+          <Text style={{ flex: 1 }}>{a.name}</Text>
+          <Text style={{ color: C.muted }}>{`${appendixPages[i] ?? '?'} page(s)`}</Text>
+        </View>
+      ))}
+    </View>
+  )
+}
+
+const BACK_BODY: Record<string, () => ReactNode> = {
+  'further-steps': () => <PdfOtherSteps />,
+  references: () => <B.References />,
+  cautions: () => <B.Cautions />,
+  revisions: () => (
+    <>
+      <B.RevisionHistory />
+      <B.RemarksLog />
+    </>
+  ),
+  signatures: () => <B.SignatureBlock />,
+  appendices: () => <Appendices />,
+}
+
+interface Placed {
+  id: string
+  title: string
+  number: number
+  continues: boolean
+  body: ReactNode
+}
+
+/**
+ * MDX hands its wrapper one element, the compiled content, not the sections.
+ * That content function is pure (props in, elements out, no hooks), so it is
+ * called here to reach the top-level sections; fragments are unwrapped.
+ */
+function topLevel(children: ReactNode): ReactElement[] {
+  const out: ReactElement[] = []
+  for (const child of Children.toArray(children)) {
+    if (!isValidElement(child)) continue
+    const el = child as ReactElement<{ children?: ReactNode }>
+    if (el.type === Section || el.type === BackMatter) out.push(el)
+    else if (el.type === Fragment) out.push(...topLevel(el.props.children))
+    else if (typeof el.type === 'function') out.push(...topLevel((el.type as (p: object) => ReactNode)(el.props)))
+  }
+  return out
+}
+
+function Paginate({ children, document }: { children?: ReactNode; document: (pages: ReactNode) => ReactNode }) {
+  const ctx = useReport()
+  const placed: Placed[] = []
+  for (const child of topLevel(children)) {
+    if (child.type === Section) {
+      const p = (child as ReactElement<SectionProps>).props
+      const n = ctx.numbering.section[Number(p.ordinal ?? -1)]
+      if (n) placed.push({ id: p.id, title: p.title, number: n, continues: p.page === 'continue', body: p.children })
+    } else if (child.type === BackMatter) {
+      for (const sec of backMatterSections(ctx, ctx.numbering.backMatterStart)) {
+        placed.push({ ...sec, body: BACK_BODY[sec.id]() })
+      }
+    }
+  }
+  const pages: Placed[][] = []
+  for (const sec of placed) {
+    if (sec.continues && pages.length) pages[pages.length - 1].push(sec)
+    else pages.push([sec])
+  }
+  return document(
+    pages.map((secs) => (
+      <PdfPage key={secs[0].id}>
+        {secs.map((sec, i) => (
+          <View key={sec.id}>
+            <SectionHead id={sec.id} number={sec.number} title={sec.title} first={i === 0} />
+            {sec.body}
+          </View>
+        ))}
+      </PdfPage>
+    )),
+  )
+}
+
+export function pdfWrapper(document: (pages: ReactNode) => ReactNode) {
+  return function Wrapper({ children }: { children?: ReactNode }) {
+    return <Paginate document={document}>{children}</Paginate>
+  }
+}
+
+export const pdfReportComponents: ReportComponents = {
+  Section,
+  TitleBlock: B.TitleBlock,
+  InputsTable: B.InputsTable,
+  Steps: PdfSteps,
+  Step: PdfStep,
+  OtherSteps: PdfOtherSteps,
+  ResultsTable: B.ResultsTable,
+  ChecksTable: B.ChecksTable,
+  Figure: B.Figure,
+  Plot: B.Plot,
+  UtilisationChart: B.UtilisationChart,
+  Verdict: B.Verdict,
+  References: B.References,
+  Cautions: B.Cautions,
+  RevisionHistory: B.RevisionHistory,
+  RemarksLog: B.RemarksLog,
+  SignatureBlock: B.SignatureBlock,
+  BackMatter,
+  MathBlock,
+  MathInline,
+}
+
+export const pdfMarkdownComponents = {
+  p: P, h2: H2, h3: H3, ul: UL, ol: OL, li: LI, em: Em, strong: Strong, code: Code, a: A,
+}

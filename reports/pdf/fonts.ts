@@ -1,0 +1,87 @@
+/**
+ * Registers the shipped Noto TTFs with react-pdf once per fonts folder. TTF,
+ * not WOFF: fontkit parses TTF markedly faster. Hyphenation is switched off so
+ * words never split unpredictably across lines.
+ */
+import { join } from 'node:path'
+import { Font } from '@react-pdf/renderer'
+import type { RenderOptions } from '../types'
+
+export const SANS = 'Noto Sans'
+export const MONO = 'Noto Sans Mono'
+
+let registered: string | null = null
+let prepared: Promise<void> | null = null
+
+const VARIANTS = [
+  { fontFamily: SANS, fontWeight: 400, fontStyle: 'normal' },
+  { fontFamily: SANS, fontWeight: 700, fontStyle: 'normal' },
+  { fontFamily: SANS, fontWeight: 400, fontStyle: 'italic' },
+  { fontFamily: SANS, fontWeight: 700, fontStyle: 'italic' },
+  { fontFamily: MONO, fontWeight: 400, fontStyle: 'normal' },
+  { fontFamily: MONO, fontWeight: 700, fontStyle: 'normal' },
+] as const
+
+export function fontsDir(opts: RenderOptions = {}): string {
+  return opts.fontsDir ?? join(opts.rootDir ?? process.cwd(), 'fonts')
+}
+
+export function registerFonts(opts: RenderOptions = {}): void {
+  const dir = fontsDir(opts)
+  if (registered === dir) return
+  const f = (file: string) => join(dir, file)
+  Font.register({
+    family: SANS,
+    fonts: [
+      { src: f('NotoSans-Regular.ttf'), fontWeight: 400, fontStyle: 'normal' },
+      { src: f('NotoSans-Bold.ttf'), fontWeight: 700, fontStyle: 'normal' },
+      { src: f('NotoSans-Italic.ttf'), fontWeight: 400, fontStyle: 'italic' },
+      { src: f('NotoSans-BoldItalic.ttf'), fontWeight: 700, fontStyle: 'italic' },
+    ],
+  })
+  Font.register({
+    family: MONO,
+    fonts: [
+      { src: f('NotoSansMono-Regular.ttf'), fontWeight: 400 },
+      { src: f('NotoSansMono-Bold.ttf'), fontWeight: 700 },
+    ],
+  })
+  Font.registerHyphenationCallback((word) => [word])
+  registered = dir
+  prepared = null
+}
+
+type Layout = (text: string, features?: unknown, ...rest: unknown[]) => unknown
+
+/**
+ * Loads every variant and memoises fontkit's `layout` per (text, features).
+ * Shaping with Noto's GSUB/GPOS tables was the largest single cost of a
+ * render, and a report repeats the same labels, units and numbers on every
+ * page. Safe because textkit copies the positions it scales and only reads
+ * the glyph run.
+ */
+export function prepareFonts(opts: RenderOptions = {}): Promise<void> {
+  registerFonts(opts)
+  prepared ??= (async () => {
+    for (const v of VARIANTS) {
+      await Font.load(v)
+      const data = Font.getFont(v)?.data as unknown as { layout: Layout; __memo?: boolean } | null
+      if (!data || data.__memo) continue
+      const original = data.layout.bind(data)
+      const memo = new Map<string, unknown>()
+      data.layout = (text, features, ...rest) => {
+        if (typeof text !== 'string' || rest.some((r) => r !== undefined && r !== 'ltr')) return original(text, features, ...rest)
+        const key = `${JSON.stringify(features ?? null)}\u0000${text}`
+        let run = memo.get(key)
+        if (run === undefined) {
+          if (memo.size > 50_000) memo.clear()
+          run = original(text, features, ...rest)
+          memo.set(key, run)
+        }
+        return run
+      }
+      data.__memo = true
+    }
+  })()
+  return prepared
+}

@@ -1,0 +1,92 @@
+/**
+ * Every PDF page: the title block on top, sign-off strip at the bottom, and the
+ * watermark for revisions that must not be relied on. A <Page> holds one
+ * section or a few short ones, which keeps react-pdf's layout cost linear.
+ */
+import type { ReactNode } from 'react'
+import { Page, Text, View } from '@react-pdf/renderer'
+import { STATE_LABEL, formatDate, watermarkFor } from '../model/format'
+import { sectionAnchor } from '../model/context'
+import { useReport } from '../model/react-context'
+import { signatories } from '../model/views'
+import { C, HEADER_TOP, MARGIN_X, s } from './styles'
+
+const label = { fontSize: 5.6, color: C.muted, letterSpacing: 0.3, lineHeight: 1.2 }
+const value = { fontSize: 7.4, fontWeight: 700 as const, lineHeight: 1.25 }
+
+function Cell({ k, v, flex, last }: { k: string; v?: string; flex: number; last?: boolean }) {
+  return (
+    <View style={{ flex, height: 22, paddingHorizontal: 5, paddingTop: 2.5, borderRightWidth: last ? 0 : 0.6, borderRightColor: C.rule }}>
+      <Text style={label}>{k.toUpperCase()}</Text>
+      {v ? <Text style={value}>{v}</Text> : null}
+    </View>
+  )
+}
+
+function Header() {
+  const { pkg } = useReport()
+  return (
+    <View fixed style={{ position: 'absolute', top: HEADER_TOP, left: MARGIN_X, right: MARGIN_X, height: 46, borderWidth: 0.8, borderColor: C.ink }}>
+      <View style={{ flexDirection: 'row', height: 22.4, borderBottomWidth: 0.6, borderBottomColor: C.rule }}>
+        <Cell k="Project" v={`${pkg.project.code} · ${pkg.project.name}`} flex={3} />
+        <Cell k="Calculation" v={pkg.calc.number} flex={1.6} />
+        <Cell k="Revision · state" v={`${pkg.revision.label} · ${STATE_LABEL[pkg.revision.state]}`} flex={1.5} />
+        {/* The number itself is stamped by finishPdf, keeping every page static for react-pdf. */}
+        <Cell k="Page" flex={1} last />
+      </View>
+      <View style={{ flexDirection: 'row', height: 22 }}>
+        <Cell k="Client" v={pkg.project.client} flex={3} />
+        <Cell k="Title" v={pkg.calc.title} flex={4.1} last />
+      </View>
+    </View>
+  )
+}
+
+function Footer() {
+  const { pkg } = useReport()
+  return (
+    <View fixed style={{ position: 'absolute', bottom: 18, left: MARGIN_X, right: MARGIN_X, height: 26, borderTopWidth: 0.8, borderTopColor: C.ink, flexDirection: 'row', paddingTop: 3 }}>
+      {signatories(pkg).map((sg) => (
+        <View key={sg.role} style={{ flex: 1 }}>
+          <Text style={label}>{sg.role.toUpperCase()}</Text>
+          <Text style={{ fontSize: 7, lineHeight: 1.25 }}>{`${sg.name} · ${sg.date}`}</Text>
+        </View>
+      ))}
+      <View style={{ flex: 1, alignItems: 'flex-end' }}>
+        <Text style={label}>{`GENERATED ${formatDate(pkg.generatedAt)}`}</Text>
+        <Text style={{ fontSize: 6.4, color: C.muted, lineHeight: 1.25 }}>{`engine ${pkg.engineVersion} · ${pkg.templateVersion}`}</Text>
+      </View>
+    </View>
+  )
+}
+
+function Watermark({ text }: { text: string }) {
+  return (
+    <View fixed style={{ position: 'absolute', top: 0, left: 0, right: 0, bottom: 0, alignItems: 'center', justifyContent: 'center' }}>
+      <Text style={{ fontSize: text.length > 6 ? 84 : 120, fontWeight: 700, color: C.fail, opacity: 0.13, transform: 'rotate(-40deg)' }}>{text}</Text>
+    </View>
+  )
+}
+
+export function SectionHead({ id, number, title, first }: { id: string; number: number; title: string; first: boolean }) {
+  return (
+    // Bookmarks work on any node at runtime; react-pdf's types only list them on Page.
+    <View style={[s.sectionHead, first ? {} : { marginTop: 16 }]} minPresenceAhead={80} id={sectionAnchor(id)} {...({ bookmark: { title: `${number}  ${title}`, fit: true } } as object)}>
+      <Text style={s.sectionNum}>{String(number)}</Text>
+      <Text style={s.sectionTitle}>{title}</Text>
+    </View>
+  )
+}
+
+export function PdfPage({ children }: { children?: ReactNode }) {
+  const { pkg } = useReport()
+  const mark = watermarkFor(pkg.revision.state)
+  return (
+    <Page size={pkg.paper} style={s.page} experimentalPagination={process.env.INV_NEXT === '1'}>
+      <Header />
+      {children}
+      <Footer />
+      {mark ? <Watermark text={mark} /> : null}
+    </Page>
+  )
+}
