@@ -39,7 +39,7 @@ export const FIGURE_COMPONENTS = ['Figure', 'Plot', 'UtilisationChart']
 /** Sections BackMatter expands into, in order; empty ones are skipped in both renderings. */
 export const BACK_MATTER = [
   { id: 'further-steps', title: 'Further steps', continues: false },
-  { id: 'references', title: 'References', continues: false },
+  { id: 'references', title: 'References', continues: true },
   { id: 'cautions', title: 'Cautions and limits', continues: true },
   { id: 'revisions', title: 'Revision history and remarks', continues: false },
   { id: 'signatures', title: 'Signatures', continues: true },

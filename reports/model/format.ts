@@ -5,7 +5,8 @@
 import type { StepVerdict } from '../../lib/calc/types'
 import type { RevisionState } from '../types'
 
-const MINUS = '\u2212'
+// ASCII hyphen-minus: the shipped Noto Sans has no U+2212, and copied numbers must paste as numbers.
+const MINUS = '-'
 
 /** Digits follow magnitude: a few significant figures, never scientific notation. */
 export function formatNumber(n: number, digits?: number): string {
@@ -29,8 +30,9 @@ export function formatValue(value: number | string | boolean | undefined, unit?:
   return unit === '°' ? `${body}°` : `${body} ${unit}`
 }
 
+/** Same digits as the step that shows the working, so the two always read alike. */
 export function formatUtilisation(u: number): string {
-  return u.toFixed(2)
+  return formatNumber(u)
 }
 
 export const VERDICT_LABEL: Record<StepVerdict, string> = {

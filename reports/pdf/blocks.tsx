@@ -8,6 +8,7 @@ import {
 } from '../model/views'
 import { SceneSvg } from './scene'
 import { PdfTable } from './table'
+import { MONO } from './fonts'
 import { C } from './styles'
 
 function PdfFigure({ fig }: { fig: FigureView | null }) {
@@ -45,7 +46,7 @@ export function TitleBlock() {
       {t.rows.map(([k, v]) => (
         <View key={k} style={{ flexDirection: 'row', borderTopWidth: 0.5, borderTopColor: C.rule, paddingHorizontal: 10, paddingVertical: 3 }}>
           <Text style={{ width: 90, fontSize: 7.4, color: C.muted }}>{k}</Text>
-          <Text style={{ flex: 1, fontSize: k === 'Result SHA-256' ? 6.6 : 8.4, fontFamily: k === 'Result SHA-256' ? 'Noto Sans Mono' : 'Noto Sans' }}>{v}</Text>
+          <Text style={{ flex: 1, fontSize: k === 'Result SHA-256' ? 6.6 : 8.4, ...(k === 'Result SHA-256' ? { fontFamily: MONO } : {}) }}>{v}</Text>
         </View>
       ))}
     </View>

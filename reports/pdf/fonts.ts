@@ -9,6 +9,8 @@ import type { RenderOptions } from '../types'
 
 export const SANS = 'Noto Sans'
 export const MONO = 'Noto Sans Mono'
+/** The text stack: Sans, with Mono filling in the symbols the Sans subset lacks. */
+export const TEXT_STACK = [SANS, MONO]
 
 let registered: string | null = null
 let prepared: Promise<void> | null = null
@@ -20,6 +22,8 @@ const VARIANTS = [
   { fontFamily: SANS, fontWeight: 700, fontStyle: 'italic' },
   { fontFamily: MONO, fontWeight: 400, fontStyle: 'normal' },
   { fontFamily: MONO, fontWeight: 700, fontStyle: 'normal' },
+  { fontFamily: MONO, fontWeight: 400, fontStyle: 'italic' },
+  { fontFamily: MONO, fontWeight: 700, fontStyle: 'italic' },
 ] as const
 
 export function fontsDir(opts: RenderOptions = {}): string {
@@ -39,11 +43,15 @@ export function registerFonts(opts: RenderOptions = {}): void {
       { src: f('NotoSans-BoldItalic.ttf'), fontWeight: 700, fontStyle: 'italic' },
     ],
   })
+  // Mono doubles as the fallback for glyphs the Sans lacks (−, ≤, ≥, √, …), so it
+  // needs every style the Sans uses; its upright faces stand in for italics.
   Font.register({
     family: MONO,
     fonts: [
-      { src: f('NotoSansMono-Regular.ttf'), fontWeight: 400 },
-      { src: f('NotoSansMono-Bold.ttf'), fontWeight: 700 },
+      { src: f('NotoSansMono-Regular.ttf'), fontWeight: 400, fontStyle: 'normal' },
+      { src: f('NotoSansMono-Bold.ttf'), fontWeight: 700, fontStyle: 'normal' },
+      { src: f('NotoSansMono-Regular.ttf'), fontWeight: 400, fontStyle: 'italic' },
+      { src: f('NotoSansMono-Bold.ttf'), fontWeight: 700, fontStyle: 'italic' },
     ],
   })
   Font.registerHyphenationCallback((word) => [word])

@@ -31,7 +31,10 @@ export function MathBlock({ tex, number }: { tex: string; number?: string }) {
  * Distance from the bottom of a text line box to its baseline, as a fraction
  * of the font size. Measured for Noto Sans at LINE line height.
  */
-export const BASELINE_DEPTH = (LINE - 1.069 - 0.293) / 2 + 0.293
+export const BASELINE_DEPTH = (LINE - 1.069 - 0.293) / 2 + 0.293 + 0.05
+
+/** TeX glyphs have a smaller x-height than Noto Sans; this brings them level. */
+export const MATH_SCALE = 1.08
 
 /**
  * One inline formula as a flex item of a paragraph row. The row aligns items
@@ -39,12 +42,12 @@ export const BASELINE_DEPTH = (LINE - 1.069 - 0.293) / 2 + 0.293
  * baselines line up. The outline itself is absolutely positioned, because
  * react-pdf measures Svg heights wrongly inside flowing rows.
  */
-export function MathInlineItem({ tex, size = BODY_SIZE, marginLeft = 0 }: { tex: string; size?: number; marginLeft?: number }) {
+export function MathInlineItem({ tex, size = BODY_SIZE * MATH_SCALE, marginRight = 0 }: { tex: string; size?: number; marginRight?: number }) {
   const m = texToShape(tex, false)
-  const depth = BASELINE_DEPTH * size
-  const height = Math.max(LINE * size, m.ascent * size + depth)
+  const depth = BASELINE_DEPTH * BODY_SIZE
+  const height = Math.max(LINE * BODY_SIZE, m.ascent * size + depth)
   return (
-    <View style={{ width: m.width * size, height, marginLeft }}>
+    <View style={{ width: m.width * size, height, marginRight }}>
       <View style={{ position: 'absolute', left: 0, top: height - depth - m.ascent * size }}>
         <MathSvg tex={tex} display={false} size={size} />
       </View>

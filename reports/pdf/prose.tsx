@@ -73,13 +73,15 @@ export function Inline({ children, style }: Props & { style?: Style }) {
   const gap = BODY_SIZE * 0.27
   return (
     <View style={[{ flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-end' }, style ?? {}]}>
-      {tokens.map((t, i) => (
-        t.tex !== undefined ? (
-          <MathInlineItem key={i} tex={t.tex} marginLeft={t.spaceBefore && i > 0 ? gap : 0} />
+      {tokens.map((t, i) => {
+        // The gap trails the token before a space, so a wrapped line never starts indented.
+        const gapAfter = tokens[i + 1]?.spaceBefore ? gap : 0
+        return t.tex !== undefined ? (
+          <MathInlineItem key={i} tex={t.tex} marginRight={gapAfter} />
         ) : (
-          <Text key={i} style={[...t.style, { marginLeft: t.spaceBefore && i > 0 ? gap : 0 }]}>{t.word}</Text>
+          <Text key={i} style={[...t.style, { marginRight: gapAfter }]}>{t.word}</Text>
         )
-      ))}
+      })}
     </View>
   )
 }

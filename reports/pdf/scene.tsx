@@ -1,13 +1,13 @@
 /** Draws a Scene with react-pdf's Svg primitives. */
 import { Circle, Line, Path, Rect, Svg, Text } from '@react-pdf/renderer'
 import type { Scene } from '../model/scene'
-import { SANS } from './fonts'
+import { TEXT_STACK } from './fonts'
 
 type TextProps = React.ComponentProps<typeof Text>
 
 /** react-pdf's types omit the SVG text attributes its layout reads. */
 function svgTextProps(x: number, y: number, textAnchor: string, fill: string, fontSize: number, fontWeight: number): TextProps {
-  return { x, y, textAnchor, fill, fontFamily: SANS, fontSize, fontWeight } as unknown as TextProps
+  return { x, y, textAnchor, fill, fontFamily: TEXT_STACK, fontSize, fontWeight } as unknown as TextProps
 }
 
 export function SceneSvg({ scene }: { scene: Scene }) {

@@ -10,7 +10,7 @@ import { C } from './styles'
 const VERDICT_COLOUR: Record<string, string> = { pass: C.pass, fail: C.fail, warn: C.warn, info: C.muted }
 
 const KEY = { width: 58, fontSize: 6.6, color: C.muted }
-const ROW = { flexDirection: 'row' as const, alignItems: 'center' as const, marginTop: 1.5 }
+const ROW = { flexDirection: 'row' as const, alignItems: 'center' as const, marginTop: 2.5 }
 
 /**
  * Title line (with the step id), formula, values with the result in a fixed
@@ -45,10 +45,10 @@ export function PdfStepBox({ v }: { v: StepView }) {
             {v.result || '—'}
           </Text>
         </View>
-        <Text style={{ fontSize: 7.2, lineHeight: 1.35, marginTop: 1 }}>
-          <Text style={{ fontSize: 6.6, color: C.muted }}>{'Source            '}</Text>
-          {v.source ?? '—'}
-        </Text>
+        <View style={ROW}>
+          <Text style={KEY}>Source</Text>
+          <Text style={{ flex: 1, fontSize: 7.2, lineHeight: 1.35 }}>{v.source ?? '—'}</Text>
+        </View>
         {v.note ? <Text style={{ fontSize: 7, fontStyle: 'italic', color: C.muted, lineHeight: 1.3 }}>{v.note}</Text> : null}
       </View>
     </View>

@@ -1,7 +1,7 @@
 /** Page geometry and the PDF's type scale; one place so every block lines up. */
 import { StyleSheet } from '@react-pdf/renderer'
 import type { Paper } from '../types'
-import { MONO, SANS } from './fonts'
+import { MONO, TEXT_STACK } from './fonts'
 
 export const PAGE_SIZE: Record<Paper, [number, number]> = { A4: [595.28, 841.89], LETTER: [612, 792] }
 export const MARGIN_X = 44
@@ -28,7 +28,7 @@ export const C = {
 }
 
 export const s = StyleSheet.create({
-  page: { fontFamily: SANS, fontSize: BODY_SIZE, color: C.ink, paddingTop: BODY_TOP, paddingBottom: BODY_BOTTOM, paddingHorizontal: MARGIN_X, lineHeight: LINE },
+  page: { fontFamily: TEXT_STACK, fontSize: BODY_SIZE, color: C.ink, paddingTop: BODY_TOP, paddingBottom: BODY_BOTTOM, paddingHorizontal: MARGIN_X, lineHeight: LINE },
   sectionHead: { flexDirection: 'row', alignItems: 'flex-end', borderBottomWidth: 1.2, borderBottomColor: C.accent, paddingBottom: 4, marginBottom: 10 },
   sectionNum: { fontSize: 14, fontWeight: 700, color: C.accent, width: 26, lineHeight: 1.2 },
   sectionTitle: { fontSize: 14, fontWeight: 700, lineHeight: 1.2 },

@@ -1,0 +1,51 @@
+/**
+ * Renders the fixture packages to out/demo: PDFs (A4 and US Letter, a draft
+ * Hart package, one with an appended attachment), their pages as PNGs for a
+ * visual check, and the standalone web document.
+ */
+import { execFileSync } from 'node:child_process'
+import { mkdirSync, rmSync, writeFileSync } from 'node:fs'
+import { join } from 'node:path'
+import { PDFDocument, StandardFonts } from 'pdf-lib'
+import { renderPdf, renderWebDocument, type ReportPackage } from '../reports/index'
+import { peaucellierPackage } from '../tests/reports/fixtures/peaucellier'
+import { hartPackage } from '../tests/reports/fixtures/hart'
+
+async function sampleAttachment(): Promise<Uint8Array> {
+  const doc = await PDFDocument.create()
+  const page = doc.addPage([595.28, 841.89])
+  const font = await doc.embedFont(StandardFonts.Helvetica)
+  page.drawText('Supplier data sheet: pin material certificate (sample)', { x: 60, y: 760, size: 14, font })
+  doc.setCreationDate(new Date('2025-01-01T00:00:00Z'))
+  doc.setModificationDate(new Date('2025-01-01T00:00:00Z'))
+  return doc.save()
+}
+
+async function main() {
+  const out = join(process.cwd(), 'out', 'demo')
+  rmSync(out, { recursive: true, force: true })
+  mkdirSync(out, { recursive: true })
+  const withAttachment = peaucellierPackage({ state: 'in-check' })
+  withAttachment.attachments = [{ name: 'Pin material certificate.pdf', bytes: await sampleAttachment() }]
+  const jobs: [string, ReportPackage][] = [
+    ['peaucellier-a4', peaucellierPackage({ paper: 'A4' })],
+    ['peaucellier-letter', peaucellierPackage({ paper: 'LETTER' })],
+    ['peaucellier-in-check-attachment', withAttachment],
+    ['hart-draft', hartPackage()],
+  ]
+  for (const [name, pkg] of jobs) {
+    const t0 = performance.now()
+    const pdf = await renderPdf(pkg)
+    const file = join(out, `${name}.pdf`)
+    writeFileSync(file, pdf)
+    execFileSync('pdftoppm', ['-r', '60', '-png', file, join(out, name)])
+    console.log(`${name}.pdf  ${(pdf.length / 1024).toFixed(0)} kB  ${Math.round(performance.now() - t0)} ms`)
+  }
+  writeFileSync(join(out, 'peaucellier.html'), await renderWebDocument(peaucellierPackage()))
+  console.log(`written to ${out}`)
+}
+
+main().catch((err) => {
+  console.error(err)
+  process.exit(1)
+})

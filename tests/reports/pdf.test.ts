@@ -1,0 +1,77 @@
+import { describe, expect, it } from 'vitest'
+import { PDFDocument, StandardFonts } from 'pdf-lib'
+import { CAUTION_BASE, formatValue, renderPdf, sha256Hex } from '@/reports/index'
+import { peaucellierPackage } from './fixtures/peaucellier'
+import { hartPackage } from './fixtures/hart'
+import { pageCount, pdfRawText, pdfText, squash } from './helpers'
+
+const SLOW = 180_000
+
+describe('renderPdf', () => {
+  for (const paper of ['A4', 'LETTER'] as const) {
+    it(`renders the Peaucellier package on ${paper} with every step value and the cautions`, async () => {
+      const pkg = peaucellierPackage({ paper })
+      const bytes = await renderPdf(pkg)
+      const doc = await PDFDocument.load(bytes)
+      expect(doc.getPageCount()).toBeGreaterThanOrEqual(10)
+      const size = doc.getPage(0).getSize()
+      expect(Math.round(size.width)).toBe(paper === 'A4' ? 595 : 612)
+      const text = pdfText(bytes)
+      for (const step of pkg.result.steps) {
+        expect(text, `step ${step.id}`).toContain(squash(formatValue(step.value, step.unit)))
+        expect(text).toContain(step.id)
+      }
+      expect(text).toContain(squash(CAUTION_BASE))
+      for (const c of pkg.result.cautions ?? []) expect(text).toContain(squash(c))
+      expect(text).toContain(`1 of ${doc.getPageCount()}`)
+      expect(pdfRawText(bytes)).not.toContain('DRAFT')
+    }, SLOW)
+  }
+
+  it('gives byte-identical output for the same package', async () => {
+    const a = await renderPdf(peaucellierPackage())
+    const b = await renderPdf(peaucellierPackage())
+    expect(a.length).toBe(b.length)
+    expect(Buffer.from(a).equals(Buffer.from(b))).toBe(true)
+    expect(sha256Hex(a)).toBe(sha256Hex(b))
+  }, SLOW)
+
+  it('watermarks draft, in-check and superseded revisions', async () => {
+    expect(pdfRawText(await renderPdf(peaucellierPackage({ state: 'draft' })))).toContain('DRAFT')
+    expect(pdfRawText(await renderPdf(peaucellierPackage({ state: 'in-check' })))).toContain('DRAFT')
+    expect(pdfRawText(await renderPdf(peaucellierPackage({ state: 'superseded' })))).toContain('SUPERSEDED')
+  }, SLOW)
+
+  it('appends attached PDFs as stamped appendix pages', async () => {
+    const att = await PDFDocument.create()
+    const page = att.addPage([400, 300])
+    page.drawText('ATTACHED-SHEET-MARKER', { x: 40, y: 150, size: 12, font: await att.embedFont(StandardFonts.Helvetica) })
+    const plain = await renderPdf(peaucellierPackage())
+    const pkg = peaucellierPackage()
+    pkg.attachments = [{ name: 'Bearing data.pdf', bytes: await att.save() }]
+    const bytes = await renderPdf(pkg)
+    const n = await pageCount(bytes)
+    expect(n).toBe((await pageCount(plain)) + 1)
+    const text = pdfText(bytes)
+    expect(text).toContain('ATTACHED-SHEET-MARKER')
+    expect(text).toContain(`Appendix A: Bearing data.pdf - page ${n} of ${n}`)
+    expect(text).toContain(`1 of ${n}`)
+  }, SLOW)
+
+  it('renders the Hart template and leaves out sections the result does not fill', async () => {
+    const pkg = hartPackage()
+    const bytes = await renderPdf(pkg)
+    const text = pdfText(bytes)
+    for (const step of pkg.result.steps) expect(text).toContain(squash(formatValue(step.value, step.unit)))
+    expect(text).toContain('Geometry')
+    expect(text).not.toContain('Kinematics')
+    expect(text).not.toContain('Component checks')
+    expect(pdfRawText(bytes)).toContain('DRAFT')
+  }, SLOW)
+
+  it('keeps symbols the Sans face lacks (minus, ≤) through the Mono fallback', async () => {
+    const pkg = peaucellierPackage()
+    pkg.result = { ...pkg.result, cautions: ['Keep u ≤ 1 at −20 °C.'] }
+    expect(pdfText(await renderPdf(pkg))).toContain('Keep u ≤ 1 at −20 °C.')
+  }, SLOW)
+})
