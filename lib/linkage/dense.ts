@@ -12,19 +12,51 @@ export interface SolveOutcome {
 }
 
 /**
+ * Working storage of one solver size. A sweep solves a thousand small systems
+ * of the same size, and allocating these typed arrays per solve cost more than
+ * the elimination itself, so callers that solve repeatedly keep one.
+ */
+export interface SolveScratch {
+  /** Column indices of each pivot row's nonzeros right of the diagonal: the pattern of U. */
+  cols: Int32Array
+  start: Int32Array
+  /**
+   * Flat indices of every entry of A that can be nonzero, when the caller
+   * knows them; the matrix scale then reads those instead of all n² entries.
+   */
+  pattern: Int32Array | null
+}
+
+export const solveScratch = (n: number, pattern: Int32Array | null = null): SolveScratch => ({
+  cols: new Int32Array(n * n),
+  start: new Int32Array(n + 1),
+  pattern,
+})
+
+function largestEntry(a: Float64Array, n: number, pattern: Int32Array | null): number {
+  let scale = 0
+  if (pattern) {
+    for (let t = 0; t < pattern.length; t++) {
+      const v = Math.abs(a[pattern[t]])
+      if (v > scale) scale = v
+    }
+  } else {
+    for (let i = 0; i < n * n; i++) {
+      const v = Math.abs(a[i])
+      if (v > scale) scale = v
+    }
+  }
+  return scale
+}
+
+/**
  * Solves A·x = b for each right-hand side in place (A is destroyed, each b
  * becomes its x). Reports failure instead of dividing by a vanishing pivot.
  */
-export function solveInPlace(a: Float64Array, n: number, rhs: Float64Array[], tol = 1e-11): SolveOutcome {
-  let scale = 0
-  for (let i = 0; i < n * n; i++) {
-    const v = a[i] < 0 ? -a[i] : a[i]
-    if (v > scale) scale = v
-  }
+export function solveInPlace(a: Float64Array, n: number, rhs: Float64Array[], tol = 1e-11, scratch: SolveScratch = solveScratch(n)): SolveOutcome {
+  const { cols, start } = scratch
+  const scale = largestEntry(a, n, scratch.pattern)
   if (scale === 0) return { ok: false, minPivot: 0 }
-  // Column indices of each pivot row's nonzeros right of the diagonal: the pattern of U.
-  const cols = new Int32Array(n * n)
-  const start = new Int32Array(n + 1)
   let used = 0
   let minPivot = Infinity
   const nr = rhs.length
@@ -58,7 +90,10 @@ export function solveInPlace(a: Float64Array, n: number, rhs: Float64Array[], to
     const end = used
     const piv = a[c * n + c]
     for (let r = c + 1; r < n; r++) {
-      const f = a[r * n + c] / piv
+      // Most of the column is zero: test before dividing, the division is the costly part.
+      const arc = a[r * n + c]
+      if (arc === 0) continue
+      const f = arc / piv
       if (f === 0) continue
       a[r * n + c] = 0
       for (let t = start[c]; t < end; t++) a[r * n + cols[t]] -= f * a[c * n + cols[t]]

@@ -2,38 +2,69 @@ import { linkLength, type LinkageModel } from './model'
 import type { EnvelopeOut, ExtremeOut } from './results'
 import type { CaseSample } from './sweep'
 
-/** Keeps the sample where key() is largest, with its crank angle. */
-function track(samples: CaseSample[], key: (s: CaseSample) => number | undefined): ExtremeOut & { found: boolean } {
-  let best = { value: 0, crankDeg: samples[0]?.position.crankDeg ?? 0, found: false }
-  for (const s of samples) {
-    const v = key(s)
-    if (v !== undefined && (!best.found || v > best.value)) best = { value: v, crankDeg: s.position.crankDeg, found: true }
-  }
-  return best
-}
+/**
+ * Keeps the sample where the offered value is largest, with its crank angle.
+ * Values are offered one sample at a time so that one pass over a long sweep
+ * serves every quantity, with no object allocated per improvement.
+ */
+class Largest {
+  value = 0
+  crankDeg: number
+  found = false
 
-const strip = (e: ExtremeOut & { found: boolean }): ExtremeOut => ({ value: e.value, crankDeg: e.crankDeg })
+  constructor(samples: CaseSample[]) {
+    this.crankDeg = samples[0]?.position.crankDeg ?? 0
+  }
+
+  offer(v: number | undefined, crankDeg: number): void {
+    if (v !== undefined && (!this.found || v > this.value)) {
+      this.value = v
+      this.crankDeg = crankDeg
+      this.found = true
+    }
+  }
+
+  get extreme(): ExtremeOut {
+    return { value: this.value, crankDeg: this.crankDeg }
+  }
+}
 
 /**
  * Largest demands over the sweep. Tension positive throughout: maxTension is
  * ≥ 0 and maxCompression ≤ 0 (0 when the link never sees that sign).
  */
 export function envelopeOf(model: LinkageModel, loadCase: string, samples: CaseSample[]): EnvelopeOut {
+  const names = model.links.map((l) => l.name)
+  const joints = Object.keys(model.attached)
+  const tension = names.map(() => new Largest(samples))
+  const compression = names.map(() => new Largest(samples))
+  const moment = names.map(() => new Largest(samples))
+  const pin = joints.map(() => new Largest(samples))
+  const torque = new Largest(samples)
+  for (const s of samples) {
+    const p = s.position
+    for (let b = 0; b < names.length; b++) {
+      const m = s.members[names[b]]
+      tension[b].offer(m.axialMax, p.crankDeg)
+      compression[b].offer(-m.axialMin, p.crankDeg)
+      moment[b].offer(p.linkMoments?.[names[b]], p.crankDeg)
+    }
+    for (let j = 0; j < joints.length; j++) pin[j].offer(p.pinForces[joints[j]]?.magnitude, p.crankDeg)
+    torque.offer(Math.abs(p.driveTorque), p.crankDeg)
+  }
   const links: EnvelopeOut['links'] = {}
-  for (const l of model.links) {
-    const t = track(samples, (s) => s.members[l.name].axialMax)
-    const c = track(samples, (s) => -s.members[l.name].axialMin)
-    const m = track(samples, (s) => s.position.linkMoments?.[l.name])
+  model.links.forEach((l, b) => {
+    const t = tension[b]
+    const c = compression[b]
     links[l.name] = {
       length: linkLength(l),
       maxTension: { value: Math.max(t.value, 0), crankDeg: t.crankDeg },
       maxCompression: { value: Math.min(-c.value, 0), crankDeg: c.crankDeg },
-      ...(m.found ? { maxMoment: strip(m) } : {}),
+      ...(moment[b].found ? { maxMoment: moment[b].extreme } : {}),
     }
-  }
+  })
   const pins: EnvelopeOut['pins'] = {}
-  for (const j of Object.keys(model.attached)) pins[j] = strip(track(samples, (s) => s.position.pinForces[j]?.magnitude))
-  const torque = track(samples, (s) => Math.abs(s.position.driveTorque))
+  joints.forEach((j, k) => (pins[j] = pin[k].extreme))
   const at = samples.find((s) => s.position.crankDeg === torque.crankDeg)
   return {
     loadCase,

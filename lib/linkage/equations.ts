@@ -9,9 +9,10 @@ import type { LinkageModel } from './model'
  * (x, y, lc·φ), which is why the Newton solver reuses it: a toggle makes both
  * singular at once (the statics/kinematics duality of virtual work).
  */
-export function equilibriumMatrix(model: LinkageModel, pts: Float64Array): Float64Array {
+export function equilibriumMatrix(model: LinkageModel, pts: Float64Array, into?: Float64Array): Float64Array {
   const n = model.size
-  const a = new Float64Array(n * n)
+  // A sweep passes the same matrix back in: a fresh n² array per position cost more than filling it.
+  const a = into ? into.fill(0) : new Float64Array(n * n)
   const inv = 1 / model.lc
   const conns = model.connections
   for (let i = 0; i < conns.length; i++) {
@@ -21,6 +22,27 @@ export function equilibriumMatrix(model: LinkageModel, pts: Float64Array): Float
   }
   a[(3 * model.crankIndex + 2) * n + n - 1] = 1
   return a
+}
+
+/**
+ * Flat indices of the entries equilibriumMatrix can write, whatever the
+ * positions: the rest of the matrix is zero, so the solver need not scan it.
+ */
+export function equilibriumPattern(model: LinkageModel): Int32Array {
+  const n = model.size
+  const at = new Set<number>()
+  const body = (b: number, col: number): void => {
+    at.add(3 * b * n + col)
+    at.add((3 * b + 1) * n + col + 1)
+    at.add((3 * b + 2) * n + col)
+    at.add((3 * b + 2) * n + col + 1)
+  }
+  model.connections.forEach((c, i) => {
+    body(c.body, 2 * i)
+    if (c.other >= 0) body(c.other, 2 * i)
+  })
+  at.add((3 * model.crankIndex + 2) * n + n - 1)
+  return Int32Array.from([...at].sort((x, y) => x - y))
 }
 
 function addBody(a: Float64Array, n: number, inv: number, pts: Float64Array, off: number, k: number, b: number, col: number, sign: number): void {

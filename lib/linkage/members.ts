@@ -1,3 +1,4 @@
+import { firstLongest } from './longest'
 import { linkLength, type LinkageModel } from './model'
 import type { CaseLoads, CaseStatics } from './statics'
 
@@ -69,6 +70,19 @@ type ForceRec = { x: number; y: number; magnitude: number }
 
 /** Per joint, the force on each attached link from the pin; the largest governs. */
 export function pinForces(model: LinkageModel, st: CaseStatics): Record<string, ForceRec> {
+  const f = st.endForces
+  const out: Record<string, ForceRec> = {}
+  for (const { joint, points } of model.jointPoints) {
+    const t = firstLongest(f, points)
+    if (t < 0) return pinForcesByScan(model, st)
+    const i = 2 * points[t]
+    out[joint] = { x: f[i], y: f[i + 1], magnitude: Math.hypot(f[i], f[i + 1]) }
+  }
+  return out
+}
+
+/** pinForces by the plain scan: the definition, and the path for non-finite values. */
+export function pinForcesByScan(model: LinkageModel, st: CaseStatics): Record<string, ForceRec> {
   const out: Record<string, ForceRec> = {}
   const f = st.endForces
   model.links.forEach((l, b) => {
@@ -87,12 +101,12 @@ export function pinForces(model: LinkageModel, st: CaseStatics): Record<string, 
 export function groundReactions(model: LinkageModel, st: CaseStatics): Record<string, ForceRec> {
   const out: Record<string, ForceRec> = {}
   for (const j of Object.keys(model.ground)) {
+    const points = model.jointPoints.find((p) => p.joint === j)?.points ?? []
     let x = 0
     let y = 0
-    for (const b of model.attached[j] ?? []) {
-      const i = 2 * (model.offset[b] + model.links[b].points.indexOf(j))
-      x += st.endForces[i]
-      y += st.endForces[i + 1]
+    for (let t = 0; t < points.length; t++) {
+      x += st.endForces[2 * points[t]]
+      y += st.endForces[2 * points[t] + 1]
     }
     out[j] = { x, y, magnitude: Math.hypot(x, y) }
   }

@@ -55,6 +55,14 @@ export interface LinkageModel extends LinkageDef {
   /** Per connection: index of the joint among its body's points, and among the other body's (−1: ground). */
   connBodyK: Int32Array
   connOtherK: Int32Array
+  /**
+   * Every joint, in order of first appearance along the links, with the flat
+   * indices of the body points at it in link order: the per-position pin and
+   * reaction results read these instead of searching the links each time.
+   */
+  jointPoints: { joint: string; points: Int32Array }[]
+  /** 0, 1, … per connection: the connection forces' slots in a solution vector. */
+  connectionSlots: Int32Array
 }
 
 export function buildModel(def: LinkageDef): LinkageModel {
@@ -87,19 +95,26 @@ export function buildModel(def: LinkageDef): LinkageModel {
   }
   const connBodyK = Int32Array.from(connections, (c) => def.links[c.body].points.indexOf(c.joint))
   const connOtherK = Int32Array.from(connections, (c) => (c.other >= 0 ? def.links[c.other].points.indexOf(c.joint) : -1))
-  return { ...def, connections, primary, attached, crankIndex, size, lc, offset, pointCount, connBodyK, connOtherK }
+  const jointPoints = Object.entries(attached).map(([joint, bodies]) => ({
+    joint,
+    points: Int32Array.from(bodies, (b) => offset[b] + def.links[b].points.indexOf(joint)),
+  }))
+  const connectionSlots = Int32Array.from(connections, (_, i) => i)
+  return { ...def, connections, primary, attached, crankIndex, size, lc, offset, pointCount, connBodyK, connOtherK, jointPoints, connectionSlots }
 }
 
 /** World positions of every body point, in the flat layout. */
-export function pointsFromJoints(model: LinkageModel, joints: Record<string, Vec>): Float64Array {
-  const pts = new Float64Array(2 * model.pointCount)
-  model.links.forEach((l, b) => {
-    l.points.forEach((j, k) => {
+export function pointsFromJoints(model: LinkageModel, joints: Record<string, Vec>, into?: Float64Array): Float64Array {
+  const pts = into ?? new Float64Array(2 * model.pointCount)
+  for (let b = 0; b < model.links.length; b++) {
+    const l = model.links[b]
+    for (let k = 0; k < l.points.length; k++) {
       const i = 2 * (model.offset[b] + k)
-      pts[i] = joints[j].x
-      pts[i + 1] = joints[j].y
-    })
-  })
+      const p = joints[l.points[k]]
+      pts[i] = p.x
+      pts[i + 1] = p.y
+    }
+  }
   return pts
 }
 

@@ -1,5 +1,6 @@
-import { solveInPlace } from './dense'
-import { equilibriumMatrix } from './equations'
+import { solveInPlace, solveScratch, type SolveScratch } from './dense'
+import { equilibriumMatrix, equilibriumPattern } from './equations'
+import { firstLongest } from './longest'
 import { linkLength, type LinkageModel } from './model'
 import type { Vec } from './vec'
 
@@ -29,6 +30,29 @@ export type StaticsOutcome =
   | { ok: true; minPivot: number; cases: CaseStatics[]; largestConnection: number[] }
   | { ok: false; minPivot: number }
 
+/**
+ * Storage for solving one model's statics at many positions with a fixed
+ * number of load cases. Allocating the matrix, right-hand sides and end
+ * forces per position was a large share of a sweep's time. Results solved
+ * with a workspace point into it and are overwritten by the next solve.
+ */
+export interface StaticsWorkspace {
+  a: Float64Array
+  rhs: Float64Array[]
+  endForces: Float64Array[]
+  solver: SolveScratch
+}
+
+export function staticsWorkspace(model: LinkageModel, caseCount: number): StaticsWorkspace {
+  const n = model.size
+  return {
+    a: new Float64Array(n * n),
+    rhs: Array.from({ length: caseCount }, () => new Float64Array(n)),
+    endForces: Array.from({ length: caseCount }, () => new Float64Array(2 * model.pointCount)),
+    solver: solveScratch(n, equilibriumPattern(model)),
+  }
+}
+
 /** Flat index of a joint on the body that receives loads applied there (−1: a ground joint). */
 function loadPoint(model: LinkageModel, joint: string): number {
   const b = model.primary[joint]
@@ -39,11 +63,12 @@ function loadPoint(model: LinkageModel, joint: string): number {
  * Equilibrium of every body for every load case at one solved position (body
  * points in the flat layout): one factorisation, one back-substitution per case.
  */
-export function solveStatics(model: LinkageModel, pts: Float64Array, cases: CaseLoads[], detailed = cases.length): StaticsOutcome {
+export function solveStatics(model: LinkageModel, pts: Float64Array, cases: CaseLoads[], detailed = cases.length, ws?: StaticsWorkspace): StaticsOutcome {
   const n = model.size
-  const a = equilibriumMatrix(model, pts)
-  const rhs = cases.map((lc) => {
-    const b = new Float64Array(n)
+  if (ws && ws.rhs.length !== cases.length) throw new Error(`statics workspace holds ${ws.rhs.length} load cases, not ${cases.length}`)
+  const a = equilibriumMatrix(model, pts, ws?.a)
+  const rhs = cases.map((lc, q) => {
+    const b = ws ? ws.rhs[q].fill(0) : new Float64Array(n)
     for (const p of lc.pointLoads) {
       const i = loadPoint(model, p.joint)
       if (i >= 0) applyLoad(model, pts, b, model.primary[p.joint], pts[2 * i], pts[2 * i + 1], p.force.x, p.force.y)
@@ -59,14 +84,16 @@ export function solveStatics(model: LinkageModel, pts: Float64Array, cases: Case
     }
     return b
   })
-  const out = solveInPlace(a, n, rhs)
+  const out = solveInPlace(a, n, rhs, undefined, ws?.solver)
   if (!out.ok) return { ok: false, minPivot: out.minPivot }
   const largestConnection = rhs.map((x) => {
+    const t = firstLongest(x, model.connectionSlots)
+    if (t >= 0) return Math.max(0, Math.hypot(x[2 * t], x[2 * t + 1]))
     let m = 0
     for (let i = 0; i < n - 1; i += 2) m = Math.max(m, Math.hypot(x[i], x[i + 1]))
     return m
   })
-  const detail = rhs.slice(0, detailed).map((x, i) => endForces(model, cases[i], x))
+  const detail = rhs.slice(0, detailed).map((x, i) => endForces(model, cases[i], x, ws?.endForces[i].fill(0)))
   return { ok: true, minPivot: out.minPivot, cases: detail, largestConnection }
 }
 
@@ -78,8 +105,8 @@ function applyLoad(model: LinkageModel, pts: Float64Array, b: Float64Array, body
   b[3 * body + 2] -= ((x - pts[o]) * fy - (y - pts[o + 1]) * fx) / model.lc
 }
 
-function endForces(model: LinkageModel, loads: CaseLoads, x: Float64Array): CaseStatics {
-  const f = new Float64Array(2 * model.pointCount)
+function endForces(model: LinkageModel, loads: CaseLoads, x: Float64Array, into?: Float64Array): CaseStatics {
+  const f = into ?? new Float64Array(2 * model.pointCount)
   const conns = model.connections
   for (let i = 0; i < conns.length; i++) {
     const c = conns[i]

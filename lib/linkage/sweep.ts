@@ -3,7 +3,7 @@ import { linkageOf, placeAt } from './crank'
 import { groundReactions, memberForces, pinForces, type MemberForces } from './members'
 import { buildModel, pointsFromJoints, type LinkageModel } from './model'
 import type { PositionOut, ToggleOut } from './results'
-import { equilibriumResidual, solveStatics, type CaseLoads } from './statics'
+import { equilibriumResidual, solveStatics, staticsWorkspace, type CaseLoads } from './statics'
 import { DEG, dot, dist, sub, type Vec } from './vec'
 import { virtualWorkTorque, VW_STEP } from './virtual-work'
 
@@ -68,6 +68,10 @@ export function runSweep(input: SweepInput): SweepOutput {
   }))
   const cases = loads.map((l) => ({ name: l.name, samples: [] as CaseSample[] }))
   const toggles: ToggleOut[] = []
+  const solved = [...loads, ...PROBES]
+  // Reused at every position: nothing solved into them outlives its iteration.
+  const statics = staticsWorkspace(model, solved.length)
+  const pts = new Float64Array(2 * model.pointCount)
   for (const crankDeg of input.anglesDeg) {
     const th = crankDeg * DEG
     const joints = placeAt(cell, e, r, th)
@@ -75,8 +79,8 @@ export function runSweep(input: SweepInput): SweepOutput {
       toggles.push({ crankDeg, reason: 'unreachable' })
       continue
     }
-    const pts = pointsFromJoints(model, joints)
-    const st = solveStatics(model, pts, [...loads, ...PROBES], loads.length)
+    pointsFromJoints(model, joints, pts)
+    const st = solveStatics(model, pts, solved, loads.length, statics)
     if (!st.ok) {
       toggles.push({ crankDeg, reason: 'singular' })
       continue
@@ -89,19 +93,24 @@ export function runSweep(input: SweepInput): SweepOutput {
     const before = placeAt(cell, e, r, th - VW_STEP)
     const after = placeAt(cell, e, r, th + VW_STEP)
     const angles: Record<string, number> = {}
-    for (const [v, a, b] of cell.transmission) angles[v] = transmissionAngle(joints, v, a, b)
-    const minAngle = Math.min(...Object.values(angles))
-    loads.forEach((lc, i) => {
+    let minAngle = Infinity
+    for (const [v, a, b] of cell.transmission) {
+      angles[v] = transmissionAngle(joints, v, a, b)
+      minAngle = Math.min(minAngle, angles[v])
+    }
+    for (let i = 0; i < loads.length; i++) {
+      const lc = loads[i]
       const cs = st.cases[i]
       const members: Record<string, MemberForces> = {}
       const linkForces: Record<string, number> = {}
       const linkMoments: Record<string, number> = {}
-      model.links.forEach((l, b) => {
+      for (let b = 0; b < model.links.length; b++) {
+        const l = model.links[b]
         const m = memberForces(model, pts, b, lc, cs)
         members[l.name] = m
         linkForces[l.name] = l.kind === 'beam' ? (m.axialMax >= -m.axialMin ? m.axialMax : m.axialMin) : m.axialMid
         if (l.kind !== 'bar' || lc.weightPerMm) linkMoments[l.name] = m.moment
-      })
+      }
       const vw = before && after ? virtualWorkTorque(model, before, after, lc) : null
       const scale = vw ? Math.max(Math.abs(cs.torque), Math.abs(vw.torque), vw.scale) : 0
       cases[i].samples.push({
@@ -122,7 +131,7 @@ export function runSweep(input: SweepInput): SweepOutput {
         vwTorque: vw ? vw.torque : cs.torque,
         vwError: scale > 0 && vw ? Math.abs(cs.torque - vw.torque) / scale : 0,
       })
-    })
+    }
   }
   return { model, cases, toggles }
 }

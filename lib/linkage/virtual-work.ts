@@ -16,6 +16,12 @@ export interface VirtualWork {
   scale: number
 }
 
+// Module level rather than a closure per call: the sweep calls this at every position.
+const rate = (before: Record<string, Vec>, after: Record<string, Vec>, j: string): Vec => ({
+  x: (after[j].x - before[j].x) / (2 * VW_STEP),
+  y: (after[j].y - before[j].y) / (2 * VW_STEP),
+})
+
 /**
  * Principle of virtual work: the drive torque that balances the loads follows
  * from how fast their points move, τ = −Σ F·dX/dθ, with dX/dθ taken by central
@@ -28,21 +34,17 @@ export function virtualWorkTorque(
   after: Record<string, Vec>,
   loads: CaseLoads,
 ): VirtualWork {
-  const rate = (j: string): Vec => ({
-    x: (after[j].x - before[j].x) / (2 * VW_STEP),
-    y: (after[j].y - before[j].y) / (2 * VW_STEP),
-  })
   let power = 0
   let scale = 0
   for (const p of loads.pointLoads) {
-    const v = rate(p.joint)
+    const v = rate(before, after, p.joint)
     power += dot(p.force, v)
     scale += norm(p.force) * norm(v)
   }
   if (loads.weightPerMm) {
     for (const l of model.links) {
-      const a = rate(l.points[0])
-      const b = rate(l.points[l.points.length - 1])
+      const a = rate(before, after, l.points[0])
+      const b = rate(before, after, l.points[l.points.length - 1])
       const v = { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 }
       power += linkLength(l) * dot(loads.weightPerMm, v)
       scale += linkLength(l) * norm(loads.weightPerMm) * norm(v)

@@ -1,41 +1,76 @@
-/** Median time of a 1,000-position sweep with statics, per cell. */
+/**
+ * Median wall and CPU time of a 1,000-position sweep per cell: the whole calc
+ * (runMechanism), the sweep alone (positions and statics) and the positions
+ * alone (closed-form placement, no statics), so a change can be placed.
+ */
 import { runMechanism, type MechanismInput } from '@/lib/calc/mechanism'
+import { hartCell, peaucellierCell, type InversorCell } from '@/lib/linkage'
+import { placeAt } from '@/lib/linkage/crank'
+import { runSweep } from '@/lib/linkage/sweep'
+import { DEG } from '@/lib/linkage/vec'
 
-const CASES: MechanismInput[] = [
+interface Case {
+  input: MechanismInput
+  cell: InversorCell
+  crank: number
+}
+
+const CASES: Case[] = [
   {
-    mechanism: 'peaucellier',
-    geometry: { arm: 200, side: 90, crank: 70 },
-    loads: [{ name: 'push', fx: 0, fy: 150 }],
-    sweep: { fromDeg: -60, toDeg: 60, count: 1000 },
+    input: {
+      mechanism: 'peaucellier',
+      geometry: { arm: 200, side: 90, crank: 70 },
+      loads: [{ name: 'push', fx: 0, fy: 150 }],
+      sweep: { fromDeg: -60, toDeg: 60, count: 1000 },
+    },
+    cell: peaucellierCell({ arm: 200, side: 90 }),
+    crank: 70,
   },
   {
-    mechanism: 'hart',
-    geometry: { long: 240, short: 100, ratio: 0.4, crank: 40 },
-    loads: [{ name: 'push', fx: 0, fy: 150 }],
-    sweep: { fromDeg: -40, toDeg: 40, count: 1000 },
+    input: {
+      mechanism: 'hart',
+      geometry: { long: 240, short: 100, ratio: 0.4, crank: 40 },
+      loads: [{ name: 'push', fx: 0, fy: 150 }],
+      sweep: { fromDeg: -40, toDeg: 40, count: 1000 },
+    },
+    cell: hartCell({ long: 240, short: 100, ratio: 0.4 }),
+    crank: 40,
   },
 ]
+
+// Other jobs share the two cores and the garbage collector runs in bursts: many repetitions, medians.
+const WARM_UP = 10
+const RUNS = 40
 
 function median(xs: number[]): number {
   const s = [...xs].sort((a, b) => a - b)
   return s[Math.floor(s.length / 2)]
 }
 
+/** Median wall and CPU ms of fn; CPU as well, since wall time swings when the cores are shared. */
+function measure(fn: () => unknown): string {
+  for (let i = 0; i < WARM_UP; i++) fn()
+  const wall: number[] = []
+  const cpu: number[] = []
+  for (let i = 0; i < RUNS; i++) {
+    const t0 = performance.now()
+    const c0 = process.cpuUsage()
+    fn()
+    const c = process.cpuUsage(c0)
+    wall.push(performance.now() - t0)
+    cpu.push((c.user + c.system) / 1000)
+  }
+  return `${median(wall).toFixed(2)} ms (cpu ${median(cpu).toFixed(2)} ms)`
+}
+
 export default function bench(): void {
-  for (const input of CASES) {
-    for (let i = 0; i < 5; i++) runMechanism(input) // warm-up for the JIT
-    const times: number[] = []
-    const cpu: number[] = []
-    let positions = 0
-    for (let i = 0; i < 25; i++) {
-      const t0 = performance.now()
-      const c0 = process.cpuUsage()
-      positions = runMechanism(input).positions.length
-      const c = process.cpuUsage(c0)
-      times.push(performance.now() - t0)
-      cpu.push((c.user + c.system) / 1000)
-    }
-    // CPU time as well: wall time swings when other jobs share the two cores.
-    console.log(`${input.mechanism}: ${positions} positions with statics, median ${median(times).toFixed(2)} ms (cpu ${median(cpu).toFixed(2)} ms)`)
+  for (const { input, cell, crank } of CASES) {
+    const sweep = input.sweep!
+    const anglesDeg = Array.from({ length: sweep.count }, (_, i) => sweep.fromDeg + ((sweep.toDeg - sweep.fromDeg) * i) / (sweep.count - 1))
+    const positions = runMechanism(input).positions.length
+    console.log(`${input.mechanism}: ${positions} positions`)
+    console.log(`  whole calc, with statics, checks, steps, tables  median ${measure(() => runMechanism(input))}`)
+    console.log(`  sweep: positions and statics                     median ${measure(() => runSweep({ cell, crank, offset: crank, anglesDeg, loads: input.loads, weightPerMm: null, amplificationLimit: 100 }))}`)
+    console.log(`  positions only, no statics                       median ${measure(() => anglesDeg.map((a) => placeAt(cell, crank, crank, a * DEG)))}`)
   }
 }

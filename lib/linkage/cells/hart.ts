@@ -11,6 +11,9 @@ export interface HartGeometry {
   ratio: number
 }
 
+/** The point `along` O→P and `across` it (unit vectors u, n); module level, as place() runs per position. */
+const at = (u: Vec, n: Vec, along: number, across: number): Vec => add(scale(u, along), scale(n, across))
+
 /**
  * Hart's inversor. The antiparallelogram's vertices form an isosceles
  * trapezoid with bases AB (half-length q) and DE (half-length p), legs AD and
@@ -56,15 +59,14 @@ export function hartCell(g: HartGeometry): InversorCell {
       const q = quarter / p
       const delta = q - p
       const h = sqrt0(b * b - delta * delta)
-      const at = (along: number, across: number): Vec => add(scale(u, along), scale(n, across))
       return {
         O: { x: 0, y: 0 },
         P: { ...pt },
         T: scale(u, k / rho),
-        A: at(-mu * delta, -mu * h),
-        B: at(2 * q - mu * delta, -mu * h),
-        D: at((1 - mu) * delta, (1 - mu) * h),
-        E: at(p + q - mu * delta, (1 - mu) * h),
+        A: at(u, n, -mu * delta, -mu * h),
+        B: at(u, n, 2 * q - mu * delta, -mu * h),
+        D: at(u, n, (1 - mu) * delta, (1 - mu) * h),
+        E: at(u, n, p + q - mu * delta, (1 - mu) * h),
       }
     },
     transmission: [

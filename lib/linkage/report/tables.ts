@@ -7,6 +7,8 @@ export function sweepTables(ctx: ReportContext): TableOut[] {
   if (!sweep) return []
   const slugs = caseSlugs(sweep.cases.map((c) => c.name))
   const linkNames = sweep.model.links.map((l) => l.name)
+  // Built once: a template string per cell of a thousand-row table showed in profiles.
+  const linkKeys = linkNames.map((n) => `N_${n}`)
   return sweep.cases.map((c, i) => ({
     id: `tab.sweep.${slugs[i]}`,
     section: 'statics',
@@ -17,7 +19,7 @@ export function sweepTables(ctx: ReportContext): TableOut[] {
       { key: 'tracerY', label: 'Tracer y', unit: 'mm', digits: 3 },
       { key: 'driveTorque', label: 'Drive torque τ', unit: 'N·mm', digits: 1 },
       { key: 'transmissionDeg', label: 'Transmission angle', unit: '°', digits: 1 },
-      ...linkNames.map((n) => ({ key: `N_${n}`, label: `N ${n}`, unit: 'N', digits: 1 })),
+      ...linkNames.map((n, k) => ({ key: linkKeys[k], label: `N ${n}`, unit: 'N', digits: 1 })),
     ],
     rows: c.samples.map(({ position: p }) => {
       const row: Record<string, number> = {
@@ -27,7 +29,7 @@ export function sweepTables(ctx: ReportContext): TableOut[] {
         driveTorque: p.driveTorque,
         transmissionDeg: p.transmissionAngleDeg ?? 90,
       }
-      for (const n of linkNames) row[`N_${n}`] = p.linkForces[n]
+      for (let k = 0; k < linkNames.length; k++) row[linkKeys[k]] = p.linkForces[linkNames[k]]
       return row
     }),
   }))

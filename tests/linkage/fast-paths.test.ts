@@ -1,0 +1,116 @@
+import { describe, it, expect } from 'vitest'
+import fc from 'fast-check'
+import { peaucellierCell } from '@/lib/linkage/cells/peaucellier'
+import { hartCell } from '@/lib/linkage/cells/hart'
+import type { InversorCell } from '@/lib/linkage/cells/cell'
+import { linkageOf, placeAt } from '@/lib/linkage/crank'
+import { buildModel, pointsFromJoints } from '@/lib/linkage/model'
+import { solveStatics, staticsWorkspace, type CaseLoads } from '@/lib/linkage/statics'
+import { equilibriumMatrix, equilibriumPattern } from '@/lib/linkage/equations'
+import { solveInPlace, solveScratch } from '@/lib/linkage/dense'
+import { firstLongest } from '@/lib/linkage/longest'
+import { pinForces, pinForcesByScan } from '@/lib/linkage/members'
+
+/*
+ * The sweep's fast paths (reused workspaces, the matrix pattern, fewer
+ * Math.hypot calls) must give the very numbers of the straightforward code,
+ * bit for bit: several reported checks are rounding-level quantities, where
+ * any change in the arithmetic would show.
+ */
+
+const LOADS: CaseLoads[] = [
+  { name: 'a', pointLoads: [{ joint: 'T', force: { x: 12.5, y: -80 } }], weightPerMm: { x: 0, y: -0.004 } },
+  { name: 'px', pointLoads: [{ joint: 'T', force: { x: 1, y: 0 } }], weightPerMm: null },
+  { name: 'py', pointLoads: [{ joint: 'T', force: { x: 0, y: 1 } }], weightPerMm: null },
+]
+
+function positions(cell: InversorCell, r: number, e: number, from: number, to: number, n: number): Record<string, { x: number; y: number }>[] {
+  const out = []
+  for (let i = 0; i < n; i++) {
+    const j = placeAt(cell, e, r, ((from + ((to - from) * i) / (n - 1)) * Math.PI) / 180)
+    if (j) out.push(j)
+  }
+  return out
+}
+
+const CELLS: [string, InversorCell, number, number][] = [
+  ['Peaucellier', peaucellierCell({ arm: 150, side: 60 }), 60, 60],
+  ['Peaucellier, arc', peaucellierCell({ arm: 150, side: 60 }), 60, 52],
+  ['Hart', hartCell({ long: 240, short: 100, ratio: 0.4 }), 40, 40],
+]
+
+describe('statics with a reused workspace', () => {
+  for (const [name, cell, r, e] of CELLS) {
+    it(`${name}: equals a fresh solve at every position, including the symmetric one`, () => {
+      const model = buildModel(linkageOf(cell, e, r))
+      const ws = staticsWorkspace(model, LOADS.length)
+      const pts = new Float64Array(2 * model.pointCount)
+      // 0° is in the list: mirror-image positions give exact ties in pivot and force ranking.
+      for (const joints of [...positions(cell, r, e, -80, 80, 33), placeAt(cell, e, r, 0)!]) {
+        const fresh = solveStatics(model, pointsFromJoints(model, joints), LOADS)
+        const reused = solveStatics(model, pointsFromJoints(model, joints, pts), LOADS, LOADS.length, ws)
+        expect(reused.ok).toBe(fresh.ok)
+        if (!fresh.ok || !reused.ok) continue
+        expect(reused.minPivot).toBe(fresh.minPivot)
+        expect(reused.largestConnection).toEqual(fresh.largestConnection)
+        fresh.cases.forEach((c, i) => {
+          expect(Array.from(reused.cases[i].endForces)).toEqual(Array.from(c.endForces))
+          expect(reused.cases[i].torque).toBe(c.torque)
+          expect(pinForces(model, reused.cases[i])).toEqual(pinForcesByScan(model, c))
+        })
+      }
+    })
+  }
+
+  it('solveInPlace with the equilibrium pattern equals the full scan', () => {
+    const [, cell, r, e] = CELLS[2]
+    const model = buildModel(linkageOf(cell, e, r))
+    const n = model.size
+    const scratch = solveScratch(n, equilibriumPattern(model))
+    for (const joints of positions(cell, r, e, -85, 85, 21)) {
+      const a = equilibriumMatrix(model, pointsFromJoints(model, joints))
+      const b = Float64Array.from({ length: n }, (_, i) => Math.sin(i + 1))
+      const a2 = a.slice()
+      const b2 = b.slice()
+      const plain = solveInPlace(a, n, [b])
+      const fast = solveInPlace(a2, n, [b2], undefined, scratch)
+      expect(fast).toEqual(plain)
+      expect(Array.from(b2)).toEqual(Array.from(b))
+    }
+  })
+})
+
+/** The plain ranking the fast one stands for: strict `>` on Math.hypot, first kept. */
+function plainLongest(f: Float64Array, at: number[]): number {
+  let best = -1
+  let bestLen = 0
+  at.forEach((i, t) => {
+    const len = Math.hypot(f[2 * i], f[2 * i + 1])
+    if (best < 0 || len > bestLen) {
+      best = t
+      bestLen = len
+    }
+  })
+  return best
+}
+
+describe('firstLongest', () => {
+  it('picks what the Math.hypot scan picks, or declines', () => {
+    const component = fc.oneof(
+      fc.double({ min: -1e3, max: 1e3, noNaN: true }),
+      fc.constantFrom(0, -0, 1, -1, 3, 4, 1e-200, 1e200, NaN, Infinity),
+    )
+    fc.assert(
+      fc.property(fc.array(fc.tuple(component, component), { minLength: 1, maxLength: 8 }), fc.boolean(), (vs, mirror) => {
+        // Mirrored copies make exact ties, the case the first-kept rule is about.
+        const all = mirror ? [...vs, ...vs.map(([x, y]) => [y, -x] as [number, number])] : vs
+        const f = Float64Array.from(all.flat())
+        const at = all.map((_, i) => i)
+        const t = firstLongest(f, at)
+        if (t >= 0) expect(t).toBe(plainLongest(f, at))
+        else expect(all.some(([x, y]) => !Number.isFinite(x * x + y * y) || Math.hypot(x, y) < 1e-140)).toBe(true)
+      }),
+      { numRuns: 2000 },
+    )
+  })
+})
