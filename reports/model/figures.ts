@@ -3,7 +3,7 @@ import type { ReportContext } from './context'
 import { mechanismScene, type DiagramAt } from './diagram'
 import { PLOT_TITLE, plotScene, type PlotKind } from './plots'
 import type { Scene } from './scene'
-import { utilisationScene } from './utilisation'
+import { CHART_ALL_UP_TO, utilisationScene } from './utilisation'
 
 export interface FigureView {
   scene: Scene
@@ -41,5 +41,7 @@ export function utilisationFigure(ctx: ReportContext, caption: string | undefine
   if (!name) return null
   const scene = utilisationScene(ctx.pkg.result.checks ?? [], ctx.figureWidth, ctx.numberOf)
   if (!scene) return null
-  return { scene, label: name, caption: caption ?? 'Utilisation of every component check; numbers are step numbers.' }
+  const checks = ctx.pkg.result.checks ?? []
+  const what = checks.length > CHART_ALL_UP_TO ? 'the governing check of each component' : 'every component check'
+  return { scene, label: name, caption: caption ?? `Utilisation of ${what}; numbers are step numbers.` }
 }

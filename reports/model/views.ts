@@ -128,7 +128,9 @@ export const CAUTION_BASE =
 
 export function cautions(pkg: ReportPackage): string[] {
   const f = pkg.result.feasibility
-  return [CAUTION_BASE, ...(f && !f.ok ? [f.message] : []), ...(pkg.result.cautions ?? [])]
+  // The engine may carry its own wording of the general caution; print it once, in ours.
+  const own = (pkg.result.cautions ?? []).filter((c) => !/does not replace the judgement of a competent engineer/i.test(c))
+  return [CAUTION_BASE, ...(f && !f.ok ? [f.message] : []), ...own]
 }
 
 /** Template references first, then every distinct source the steps and checks cite. */

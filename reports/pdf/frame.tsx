@@ -82,7 +82,7 @@ export function PdfPage({ children }: { children?: ReactNode }) {
   const { pkg } = useReport()
   const mark = watermarkFor(pkg.revision.state)
   return (
-    <Page size={pkg.paper} style={s.page} experimentalPagination={process.env.INV_NEXT === '1'}>
+    <Page size={pkg.paper} style={s.page}>
       <Header />
       {children}
       <Footer />
