@@ -1,3 +1,3 @@
-/** The caution every screen footer and every PDF carries. */
+/** The caution every screen footer, every check result and every PDF carries — one wording. */
 export const GENERAL_CAUTION =
-  'A calculation here supports but does not replace the judgement of a competent engineer. Local codes, national annexes and licensed practice govern.'
+  'This calculation supports but does not replace the judgement of a competent engineer; local codes, national annexes and licensed practice govern.'

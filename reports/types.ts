@@ -59,7 +59,7 @@ export interface StrokeInfo {
   half: number
   crankMinDeg: number
   crankMaxDeg: number
-  usable?: boolean
+  usable?: { half: number; crankMinDeg: number; crankMaxDeg: number }
 }
 
 export interface LoadCasePositions {

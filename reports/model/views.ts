@@ -2,6 +2,7 @@
  * Plain-data views of the package for components: both renderings draw the
  * same strings, so they can only differ in layout, never in content.
  */
+import { GENERAL_CAUTION } from '../../lib/cautions'
 import type { CheckItem, Step, Table } from '../../lib/calc/types'
 import type { ReportPackage } from '../types'
 import type { ReportContext } from './context'
@@ -123,13 +124,13 @@ export function remarksTable(pkg: ReportPackage, ctx: ReportContext): TableView 
   }
 }
 
-export const CAUTION_BASE =
-  'This calculation supports but does not replace the judgement of a competent engineer; local codes, national annexes and licensed practice govern.'
+/** The one wording of the general caution, shared with the app footer and the checks. */
+export const CAUTION_BASE = GENERAL_CAUTION
 
 export function cautions(pkg: ReportPackage): string[] {
   const f = pkg.result.feasibility
-  // The engine may carry its own wording of the general caution; print it once, in ours.
-  const own = (pkg.result.cautions ?? []).filter((c) => !/does not replace the judgement of a competent engineer/i.test(c))
+  // The result carries the general caution too; print it once.
+  const own = (pkg.result.cautions ?? []).filter((c) => c !== CAUTION_BASE)
   return [CAUTION_BASE, ...(f && !f.ok ? [f.message] : []), ...own]
 }
 

@@ -1,0 +1,67 @@
+import { expect, test, type Page } from '@playwright/test'
+import { openDemoProject, signInAs } from './helpers'
+
+async function openCalc(page: Page, number: string) {
+  await openDemoProject(page)
+  await page.getByTestId('register').getByRole('link', { name: number }).click()
+  await expect(page.getByRole('heading', { level: 1 })).toContainText(number)
+}
+
+test('the engineer sees a bad input at its field, then saves, runs and sends a revision to check', async ({ page }) => {
+  await signInAs(page, 'engineer')
+  await openCalc(page, 'LC-003')
+  const form = page.getByTestId('inputs-form')
+  const side = form.getByLabel(/Rhombus side s/)
+  const before = await side.inputValue()
+  await side.fill('-80')
+  await form.getByRole('button', { name: 'Save and run' }).click()
+  await expect(form.locator('#in-geometry-side-error')).toContainText('positive')
+  await expect(form.getByRole('alert')).toContainText('Not saved')
+  await page.reload()
+  await expect(page.getByTestId('inputs-form').getByLabel(/Rhombus side s/)).toHaveValue(before)
+
+  await page.getByTestId('inputs-form').getByLabel(/Crank r/).fill('80')
+  await page.getByTestId('inputs-form').getByRole('button', { name: 'Save and run' }).click()
+  await expect(page.getByTestId('inputs-form').getByRole('alert')).toContainText('Saved')
+  await expect(page.locator('.inverso-report')).toContainText('Inversion constant')
+  await page.screenshot({ path: 'test-results/calc-engineer.png', fullPage: true })
+
+  await page.getByRole('button', { name: 'Save revision for check' }).click()
+  await expect(page.getByTestId('revisions').getByRole('alert')).toContainText('sent to check', { timeout: 30_000 })
+  await expect(page.getByTestId('revisions')).toContainText('Rev A')
+})
+
+test('checker and approver sign the revision in turn; the PDF downloads with its name', async ({ page }) => {
+  await signInAs(page, 'checker')
+  await openCalc(page, 'LC-002')
+  const panel = page.getByTestId('revisions')
+  await expect(panel.getByRole('button', { name: 'Approve' })).toHaveCount(0)
+  await panel.getByRole('button', { name: 'Mark as checked' }).click()
+  await expect(panel.getByRole('alert')).toContainText('checked', { timeout: 30_000 })
+  await page.screenshot({ path: 'test-results/calc-checker.png', fullPage: true })
+
+  await page.getByRole('button', { name: 'Sign out' }).click()
+  await signInAs(page, 'approver')
+  await openCalc(page, 'LC-002')
+  await panel.getByRole('button', { name: 'Approve' }).click()
+  await expect(panel.getByRole('alert')).toContainText('approved', { timeout: 30_000 })
+  await panel.getByRole('button', { name: 'Issue' }).click()
+  await expect(panel.getByRole('alert')).toContainText('issued', { timeout: 30_000 })
+
+  const link = panel.getByRole('link', { name: 'PDF (A4)' }).first()
+  const res = await page.request.get((await link.getAttribute('href'))!)
+  expect(res.status()).toBe(200)
+  expect(res.headers()['content-type']).toBe('application/pdf')
+  expect(res.headers()['content-disposition']).toContain('FM-CE40_LC-002_revA_A4.pdf')
+  expect((await res.body()).subarray(0, 5).toString()).toBe('%PDF-')
+})
+
+test('a checker cannot save inputs: the server refuses even a forged call', async ({ page }) => {
+  await signInAs(page, 'checker')
+  await openCalc(page, 'LC-001')
+  await expect(page.getByTestId('inputs-form').getByRole('button', { name: 'Save and run' })).toHaveCount(0)
+  await expect(page.getByRole('button', { name: 'Save revision for check' })).toHaveCount(0)
+  const projectId = page.url().split('/projects/')[1].split('/')[0]
+  const other = await page.request.get(`/api/projects/${projectId}/calcs/x/revisions/y/pdf`)
+  expect(other.status()).toBe(404)
+})
