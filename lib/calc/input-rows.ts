@@ -17,14 +17,78 @@ const GEOMETRY_LABELS: Record<string, [string, string]> = {
   crankPivotOffset: ['Crank pivot offset e from the pole', 'mm'],
 }
 
-/** Flattens a nested description (pin/link defaults) into readable rows. */
+/** Labels and units of the nested keys (pins, links, basis, self-weight, materials), by dotted key. */
+const KEY_LABELS: Record<string, [string, string]> = {
+  kind: ['Kind', ''],
+  gammaM0: ['Partial factor γM0', '—'],
+  gammaM1: ['Partial factor γM1', '—'],
+  gammaM2: ['Partial factor γM2', '—'],
+  gammaM6ser: ['Partial factor γM6,ser', '—'],
+  factorOfSafety: ['Factor of safety', '—'],
+  method: ['Method', ''],
+  pinDiameter: ['Pin diameter d', 'mm'],
+  holeDiameter: ['Hole diameter d₀', 'mm'],
+  pinMaterial: ['Pin material', ''],
+  arrangement: ['Arrangement', ''],
+  'middle.thickness': ['Middle plate thickness', 'mm'],
+  'middle.material': ['Middle plate material', ''],
+  'outer.thickness': ['Outer plate thickness (each)', 'mm'],
+  'outer.material': ['Outer plate material', ''],
+  'plate1.thickness': ['Plate 1 thickness', 'mm'],
+  'plate1.material': ['Plate 1 material', ''],
+  'plate2.thickness': ['Plate 2 thickness', 'mm'],
+  'plate2.material': ['Plate 2 material', ''],
+  gap: ['Gap between plates c', 'mm'],
+  replaceable: ['Replaceable pin', ''],
+  'section.shape': ['Section', ''],
+  'section.width': ['Section width', 'mm'],
+  'section.thickness': ['Section thickness', 'mm'],
+  'section.diameter': ['Bar diameter', 'mm'],
+  'section.outerDiameter': ['Tube outer diameter', 'mm'],
+  'section.wall': ['Tube wall', 'mm'],
+  material: ['Material', ''],
+  'eye.thickness': ['Eye thickness', 'mm'],
+  'eye.width': ['Eye width across the force', 'mm'],
+  'eye.holeDiameter': ['Eye hole diameter', 'mm'],
+  'eye.pinDiameter': ['Eye pin diameter', 'mm'],
+  'eye.edgeAlong': ['Eye end distance a (hole edge to end)', 'mm'],
+  'eye.material': ['Eye material', ''],
+  'eye.table39Type': ['EN 1993-1-8 Table 3.9 type', ''],
+  length: ['Length between pins', 'mm'],
+  effectiveLengthFactor: ['Effective length factor K', '—'],
+  bucklingCurve: ['Buckling curve', ''],
+  density: ['Density', 'kg/m³'],
+  area: ['Section area', 'mm²'],
+  g: ['Gravity g', 'm/s²'],
+  directionDeg: ['Direction of gravity', '°'],
+  fy: ['Yield strength f_y', 'MPa'],
+  fu: ['Tensile strength f_u', 'MPa'],
+  E: ['Modulus E', 'MPa'],
+  source: ['Source', ''],
+  name: ['Name', ''],
+}
+
+const VALUE_LABELS: Record<string, string> = {
+  en1993: 'EN 1993-1-8 §3.13 with EN 1993-1-1',
+  aisc360: 'AISC 360-16 §D5 and §J7',
+  allowable: 'Allowable stress with a factor of safety',
+  double: 'double shear (fork)',
+  single: 'single shear (lapped)',
+  flat: 'flat bar',
+  round: 'round bar',
+  tube: 'tube',
+}
+
+/** Flattens a nested description (pin/link defaults, basis) into labelled rows. */
 function flatten(group: string, prefix: string, value: unknown, out: InputRow[]) {
   if (value === undefined || value === null) return
   if (typeof value === 'object' && !Array.isArray(value)) {
     for (const [k, v] of Object.entries(value)) flatten(group, prefix ? `${prefix}.${k}` : k, v, out)
     return
   }
-  out.push({ group, label: prefix, value: typeof value === 'number' || typeof value === 'string' ? value : String(value), unit: '' })
+  const [label, unit] = KEY_LABELS[prefix] ?? [prefix, '']
+  const shown = typeof value === 'boolean' ? (value ? 'yes' : 'no') : typeof value === 'string' ? (VALUE_LABELS[value] ?? value) : (value as number)
+  out.push({ group, label, value: shown, unit })
 }
 
 /** The inputs table of the calc package: every value the engineer entered, grouped. */
