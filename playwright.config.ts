@@ -20,7 +20,7 @@ export default defineConfig({
     command: 'rm -rf data/e2e && node --import tsx scripts/demo.ts',
     url: `http://localhost:${PORT}/sign-in`,
     reuseExistingServer: false,
-    timeout: 120_000,
+    timeout: 300_000,
     env: {
       PORT: String(PORT),
       SKIP_BUILD: '1',

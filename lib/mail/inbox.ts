@@ -17,7 +17,7 @@ export function listCaughtMail(dir = mailDir()): CaughtMail[] {
   return files
     .sort()
     .reverse()
-    .map((f) => JSON.parse(readFileSync(/*turbopackIgnore: true*/ path.join(dir, f), 'utf8')) as CaughtMail)
+    .map((f) => JSON.parse(readFileSync(path.join(/*turbopackIgnore: true*/ dir, f), 'utf8')) as CaughtMail)
 }
 
 /** The first link in a caught message, e.g. an invitation or reset link. */
