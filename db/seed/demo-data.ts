@@ -42,6 +42,7 @@ export const DEMO_CALCS = [
         { name: 'Jam at end of stroke', fx: 120, fy: -420 },
       ],
       toggleMarginDeg: 5,
+      requiredStroke: 120,
       basis: { kind: 'en1993', gammaM0: 1.0, gammaM1: 1.0, gammaM2: 1.25, gammaM6ser: 1.0 },
       factors: { load: 1.5, dynamic: 1.2 },
       defaults: { joint: PINS, link: LINKS },

@@ -37,6 +37,8 @@ const common = {
     .optional(),
   crankAnglesDeg: z.array(num()).min(1, { error: 'needs at least one angle' }).max(10000, { error: 'must hold at most 10000 angles' }).optional(),
   toggleMarginDeg: nonNegative().default(5),
+  /** Full stroke the machine needs along the line, mm; checked against the usable stroke. */
+  requiredStroke: positive().optional(),
   amplificationLimit: num().gt(1, { error: 'must be greater than 1' }).default(100),
 }
 

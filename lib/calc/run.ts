@@ -2,7 +2,8 @@ import { checksInputSchema, ChecksInputError, runChecks, type ChecksInput } from
 import { fieldErrorsOf } from '@/lib/schemas/field-errors'
 import { GENERAL_CAUTION } from '@/lib/cautions'
 import { mechanismInputSchema, runMechanism, type MechanismInput } from './mechanism'
-import type { CheckItem, MechanismResult } from './types'
+import { tex as texNumber } from '@/lib/linkage/tex'
+import type { CheckItem, MechanismResult, Step } from './types'
 
 /** A linkage calc: the mechanism and its loads, plus the pin and link descriptions and the design basis. */
 export interface CalcInput {
@@ -36,8 +37,27 @@ export function parseCalcInput(raw: unknown): ParsedCalcInput {
   return { ok: true, input: { mechanism: raw as MechanismInput, checks: checks?.data ?? null } }
 }
 
-function verdictOf(result: MechanismResult, checks: CheckItem[]): CalcVerdict {
+/** The machine's stroke against what the cell gives short of its toggles (symmetric about the mid position). */
+function strokeRequirement(result: MechanismResult, required: number): Step {
+  const usable = 2 * result.stroke.usable.half
+  const ok = result.feasibility.ok && usable >= required
+  return {
+    id: 'kin.required-stroke',
+    section: 'kinematics',
+    title: 'Stroke the machine needs, within the usable stroke',
+    formula: 's_{req} \\le 2 h_u',
+    substituted: `${texNumber(required)} \\le 2 \\cdot ${texNumber(result.stroke.usable.half)} = ${texNumber(usable)}`,
+    value: required / usable,
+    unit: '—',
+    source: 'design requirement (inputs)',
+    verdict: ok ? 'pass' : 'fail',
+    note: ok ? undefined : 'The cell cannot give the required stroke short of its toggle positions: lengthen the arms or change the crank.',
+  }
+}
+
+function verdictOf(result: MechanismResult, checks: CheckItem[], strokeStep: Step | null): CalcVerdict {
   if (!result.feasibility.ok) return { pass: false, maxUtilisation: 0, governing: result.feasibility.message }
+  if (strokeStep?.verdict === 'fail') return { pass: false, maxUtilisation: Number(strokeStep.value), governing: strokeStep.title }
   const worst = checks.reduce<CheckItem | null>((w, c) => (!w || c.utilisation > w.utilisation ? c : w), null)
   if (!worst) return { pass: true, maxUtilisation: 0, governing: 'no component checks requested' }
   return {
@@ -69,5 +89,8 @@ export function runCalc(input: CalcInput): { ok: true; result: CalcResult } | { 
       throw err
     }
   }
-  return { ok: true, result: { ...mech, steps, tables, checks, cautions, verdict: verdictOf(mech, checks) } }
+  const required = input.mechanism.requiredStroke
+  const strokeStep = required ? strokeRequirement(mech, required) : null
+  if (strokeStep) steps.splice(steps.findLastIndex((s) => s.section === 'kinematics') + 1, 0, strokeStep)
+  return { ok: true, result: { ...mech, steps, tables, checks, cautions, verdict: verdictOf(mech, checks, strokeStep) } }
 }

@@ -39,3 +39,15 @@ describe('npm run calc', () => {
     expect(r.stderr).toMatch(/^error: joints\.P\.holeDiameter: /)
   }, 30_000)
 })
+
+describe('required stroke', () => {
+  it('passes when the usable stroke covers it and fails the verdict when it does not', () => {
+    // Demo LC-001 geometry: k = 250² − 100² = 52 500 mm², r = 100 mm, usable half stroke ≈ 211.9 mm (computed by the engine).
+    const ok = calc({ ...DEMO_CALCS[0].inputs, requiredStroke: 120 })
+    const steps = ok.json!.steps as { id: string; verdict: string }[]
+    expect(steps.find((s) => s.id === 'kin.required-stroke')?.verdict).toBe('pass')
+    const tooLong = calc({ ...DEMO_CALCS[0].inputs, requiredStroke: 500 })
+    expect((tooLong.json!.steps as { id: string; verdict: string }[]).find((s) => s.id === 'kin.required-stroke')?.verdict).toBe('fail')
+    expect(tooLong.json!.verdict).toMatchObject({ pass: false })
+  }, 30_000)
+})

@@ -27,6 +27,7 @@ export const GEOMETRY_FIELDS: Record<CalcType, InputFieldDef[]> = {
 }
 
 export const STROKE_FIELDS: InputFieldDef[] = [
+  { path: 'requiredStroke', label: 'Stroke needed', unit: 'mm', hint: 'full travel along the line; leave empty to skip' },
   { path: 'toggleMarginDeg', label: 'Margin from toggle', unit: '°', hint: 'crank angle kept away from each locked position' },
 ]
 
