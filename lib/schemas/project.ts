@@ -35,3 +35,18 @@ export const createProjectSchema = z.object({
   name: z.string().trim().min(3, 'Give the project a name.').max(120),
   client: z.string().trim().max(120).default(''),
 })
+
+export const remarkSchema = z.object({
+  calcId: z.string().min(1),
+  revisionId: z.string().min(1),
+  stepId: z.string().min(1, 'Choose the step the remark is about.'),
+  text: z.string().trim().min(3, 'Write the remark (at least 3 characters).').max(4000),
+})
+
+export const remarkResponseSchema = z.object({
+  calcId: z.string().min(1),
+  remarkId: z.string().min(1),
+  response: z.string().trim().min(2, 'Write a response.').max(4000),
+})
+
+export const remarkCloseSchema = z.object({ calcId: z.string().min(1), remarkId: z.string().min(1) })

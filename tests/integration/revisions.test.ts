@@ -115,3 +115,21 @@ describe('working inputs', () => {
     expect((await calcByNumber('LC-003')).draftInputs).toEqual(before)
   })
 })
+
+describe('checker remarks', () => {
+  it('anchor to an existing step of a revision in check; unknown steps are refused at the step field', async () => {
+    const { addRemark, closeRemark, listRemarks, respondToRemark } = await import('@/db/remarks')
+    const calc = await calcByNumber('LC-002')
+    const rev = await saveRevision(calc, people.engineer, deps)
+    const err = await addRemark(calc, { revisionId: rev, stepId: 'no.such.step', text: 'Why?' }, people.checker).catch((e: { fieldErrors?: Record<string, string> }) => e)
+    expect((err as { fieldErrors?: Record<string, string> }).fieldErrors?.stepId).toMatch(/no step/)
+    const id = await addRemark(calc, { revisionId: rev, stepId: 'geo.inversion-constant', text: 'Please state the source of k.' }, people.checker)
+    await respondToRemark(calc, id, 'Source added: Coxeter §6.1.', people.engineer)
+    await closeRemark(calc, id, people.checker)
+    const [remark] = await listRemarks(rev)
+    expect(remark).toMatchObject({ stepId: 'geo.inversion-constant', status: 'closed', response: 'Source added: Coxeter §6.1.' })
+    // The remarks log of the package lists it.
+    const pkg = await loadReportPackage(rev)
+    expect(pkg.remarks[0]).toMatchObject({ stepId: 'geo.inversion-constant', status: 'closed' })
+  }, 60_000)
+})

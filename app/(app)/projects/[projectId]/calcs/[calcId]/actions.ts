@@ -4,6 +4,8 @@ import { revalidatePath } from 'next/cache'
 import { z } from 'zod'
 import { projectAction, projectDataAction } from '@/app/_lib/action'
 import { addAttachment } from '@/db/attachments'
+import { addRemark, closeRemark, respondToRemark } from '@/db/remarks'
+import { remarkCloseSchema, remarkResponseSchema, remarkSchema } from '@/lib/schemas/project'
 import { localFileStore } from '@/lib/storage'
 import { rendererDeps } from '@/app/_lib/renderer'
 import { getCalc } from '@/db/queries'
@@ -51,4 +53,22 @@ export const addAttachmentAction = projectAction('calc.edit', z.object({ calcId:
   await addAttachment(await calcOf(projectId, calcId), { name: file.name, bytes: new Uint8Array(await file.arrayBuffer()) }, user.id, localFileStore())
   revalidatePath(`/projects/${projectId}/calcs/${calcId}`)
   return { ok: true, message: `${file.name} will be appended to the next revision.` }
+})
+
+export const addRemarkAction = projectAction('remark.create', remarkSchema, async ({ calcId, ...remark }, { projectId, user }) => {
+  await addRemark(await calcOf(projectId, calcId), remark, user.id)
+  revalidatePath(`/projects/${projectId}/calcs/${calcId}`)
+  return { ok: true, message: `Remark on ${remark.stepId} recorded.` }
+})
+
+export const respondRemarkAction = projectAction('remark.respond', remarkResponseSchema, async ({ calcId, remarkId, response }, { projectId, user }) => {
+  await respondToRemark(await calcOf(projectId, calcId), remarkId, response, user.id)
+  revalidatePath(`/projects/${projectId}/calcs/${calcId}`)
+  return { ok: true, message: 'Response recorded.' }
+})
+
+export const closeRemarkAction = projectAction('remark.create', remarkCloseSchema, async ({ calcId, remarkId }, { projectId, user }) => {
+  await closeRemark(await calcOf(projectId, calcId), remarkId, user.id)
+  revalidatePath(`/projects/${projectId}/calcs/${calcId}`)
+  return { ok: true, message: 'Remark closed.' }
 })

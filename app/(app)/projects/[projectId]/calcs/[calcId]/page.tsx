@@ -15,6 +15,9 @@ import { CALC_TYPE_LABELS } from '@/lib/schemas/project'
 import { pendingAttachments } from '@/db/attachments'
 import { AttachmentsForm } from './attachments-form'
 import { InputsForm } from './inputs-form'
+import { listRemarks } from '@/db/remarks'
+import type { CalcResult } from '@/lib/calc/run'
+import { RemarksPanel } from './remarks-panel'
 import { RevisionsPanel } from './revisions-panel'
 
 export const metadata: Metadata = { title: 'Calc' }
@@ -33,6 +36,11 @@ export default async function CalcPage({ params, searchParams }: Props) {
   const pkg = shown ? await loadReportPackage(shown.id) : await draftReportPackage(project, calc)
   const html = 'fieldErrors' in pkg ? null : await (await reports()).renderWebHtml(pkg)
   const base = `/projects/${projectId}/calcs/${calcId}`
+  // Steps are numbered in the order the package shows them; read that order from the rendered anchors.
+  const order = html ? [...html.matchAll(/id="step-([^"]+)"/g)].map((m) => m[1]) : []
+  const numberOf = new Map(order.map((id, i) => [id, i + 1]))
+  const titles = new Map(((shown?.result as CalcResult | null)?.steps ?? []).map((s) => [s.id, s.title]))
+  const remarks = shown ? await listRemarks(shown.id) : []
 
   return (
     <div className="flex flex-col gap-4">
@@ -57,6 +65,18 @@ export default async function CalcPage({ params, searchParams }: Props) {
             allowed={{ check: can(actor, 'calc.check'), approve: can(actor, 'calc.approve'), issue: can(actor, 'calc.issue') }}
             revisions={revisions.map((r) => ({ id: r.id, label: r.label, state: r.state, contentHash: r.contentHash, pdfHash: r.pdfHash, createdAt: r.createdAt.toISOString() }))}
           />
+          {shown && (
+            <RemarksPanel
+              projectId={projectId}
+              calcId={calcId}
+              revisionId={shown.id}
+              revisionLabel={shown.label}
+              steps={order.map((id, i) => ({ id, number: i + 1, title: titles.get(id) ?? id }))}
+              remarks={remarks.map((r) => ({ ...r, stepNumber: numberOf.get(r.stepId) ?? null }))}
+              canRemark={can(actor, 'remark.create') && shown.state === 'in-check'}
+              canRespond={can(actor, 'remark.respond')}
+            />
+          )}
           <InputsForm
             key={calc.updatedAt.getTime()}
             projectId={projectId}
