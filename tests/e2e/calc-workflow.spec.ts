@@ -36,6 +36,17 @@ test('checker and approver sign the revision in turn; the PDF downloads with its
   await openCalc(page, 'LC-002')
   const panel = page.getByTestId('revisions')
   await expect(panel.getByRole('button', { name: 'Approve' })).toHaveCount(0)
+
+  const remarks = page.getByTestId('remarks')
+  await remarks.getByLabel('Remark').fill('Please confirm the pin clearance assumption.')
+  await remarks.getByRole('button', { name: 'Add remark' }).click()
+  await expect(remarks.locator('#f-stepId-error')).toContainText('Choose the step')
+  await expect(remarks.getByLabel('Remark')).toHaveValue('Please confirm the pin clearance assumption.')
+  await remarks.getByLabel('Step').selectOption({ index: 1 })
+  await remarks.getByRole('button', { name: 'Add remark' }).click()
+  await expect(remarks.locator('li')).toContainText('Please confirm the pin clearance assumption.')
+  await expect(remarks.locator('li').first()).toContainText('Step 1')
+
   await panel.getByRole('button', { name: 'Mark as checked' }).click()
   await expect(panel.getByRole('alert')).toContainText('checked', { timeout: 30_000 })
   await page.screenshot({ path: 'test-results/calc-checker.png', fullPage: true })
