@@ -7,22 +7,24 @@ import { FieldError } from '@/app/_components/form'
 import type { ActionState } from '@/app/_lib/action'
 import type { CalcType } from '@/lib/schemas/project'
 import { saveInputsAction } from './actions'
+import { convertInputs, unitFor } from './units'
+import type { UnitSystem } from '@/lib/units'
 import { BASIS_FIELDS, BASIS_OPTIONS, FACTOR_FIELDS, GEOMETRY_FIELDS, LINK_FIELDS, PIN_FIELDS, STROKE_FIELDS, type InputFieldDef } from './input-fields'
 
-type Values = FieldValues & { loads: { name: string; fx: number; fy: number }[]; basis: { kind: string } }
+type Values = FieldValues & { loads: { name: string; fx: number; fy: number }[]; basis: { kind: string }; displayUnits?: UnitSystem }
 
 function get(errors: Record<string, string>, path: string) {
   return errors[path]
 }
 
-function InputField({ def, form, errors, disabled }: { def: InputFieldDef; form: UseFormReturn<Values>; errors: Record<string, string>; disabled: boolean }) {
+function InputField({ def, form, errors, disabled, system }: { def: InputFieldDef; form: UseFormReturn<Values>; errors: Record<string, string>; disabled: boolean; system: UnitSystem }) {
   const id = `in-${def.path.replace(/\./g, '-')}`
   const error = get(errors, def.path)
   const common = { id, disabled, className: 'field', 'aria-invalid': error ? true : undefined, 'aria-describedby': `${id}-error` }
   return (
     <div>
       <label htmlFor={id} className="mb-0.5 block text-xs text-ink/70">
-        {def.label} {def.unit && <span className="text-ink/50">[{def.unit}]</span>}
+        {def.label} {def.unit && <span className="text-ink/50">[{unitFor(def, system)}]</span>}
       </label>
       {def.options ? (
         <select {...common} {...form.register(def.path as Path<Values>)}>
@@ -61,7 +63,9 @@ function clean(value: unknown): unknown {
 export function InputsForm(props: { projectId: string; calcId: string; calcType: CalcType; initial: Values; materials: readonly string[]; editable: boolean }) {
   const { projectId, calcId, calcType, initial, materials, editable } = props
   const router = useRouter()
-  const form = useForm<Values>({ defaultValues: initial })
+  const [system, setSystem] = useState<UnitSystem>(initial.displayUnits === 'US' ? 'US' : 'SI')
+  const allDefs = (kind: string) => [GEOMETRY_FIELDS[calcType], STROKE_FIELDS, BASIS_FIELDS[kind] ?? [], FACTOR_FIELDS, PIN_FIELDS(materials), LINK_FIELDS(materials)].flat()
+  const form = useForm<Values>({ defaultValues: convertInputs(initial, allDefs(initial.basis.kind), system, 'toDisplay') })
   const loads = useFieldArray({ control: form.control, name: 'loads' })
   const [errors, setErrors] = useState<Record<string, string>>({})
   const [state, setState] = useState<ActionState>({})
@@ -70,7 +74,8 @@ export function InputsForm(props: { projectId: string; calcId: string; calcType:
 
   const submit = form.handleSubmit((values) =>
     startTransition(async () => {
-      const payload = clean(values) as Values
+      // Stored and computed in SI; the person's unit system is kept as a preference.
+      const payload: Values = { ...convertInputs(clean(values) as Values, allDefs(values.basis.kind), system, 'toSI'), displayUnits: system }
       // One plate material for the fork: the outer plates follow the middle one.
       const joint = (payload.defaults as { joint?: { middle?: { material?: string }; outer?: { material?: string } } } | undefined)?.joint
       if (joint?.outer && joint.middle) joint.outer.material = joint.middle.material
@@ -81,16 +86,26 @@ export function InputsForm(props: { projectId: string; calcId: string; calcType:
     }),
   )
 
-  const shown = [GEOMETRY_FIELDS[calcType], STROKE_FIELDS, BASIS_FIELDS[basisKind] ?? [], FACTOR_FIELDS, PIN_FIELDS(materials), LINK_FIELDS(materials)]
-    .flat()
-    .map((d) => d.path)
+  const shown = allDefs(basisKind).map((d) => d.path)
+  const switchUnits = (next: UnitSystem) => {
+    const si = convertInputs(form.getValues(), allDefs(basisKind), system, 'toSI')
+    form.reset(convertInputs(si, allDefs(basisKind), next, 'toDisplay'))
+    setSystem(next)
+  }
   // Messages for paths the editor has no field for (e.g. a joint described in the JSON) still show.
   const otherErrors = Object.entries(errors).filter(([path]) => path !== 'basis.kind' && !shown.includes(path) && !path.startsWith('loads'))
-  const field = (def: InputFieldDef) => <InputField key={def.path} def={def} form={form} errors={errors} disabled={!editable} />
+  const field = (def: InputFieldDef) => <InputField key={def.path} def={def} form={form} errors={errors} disabled={!editable} system={system} />
   return (
     <form onSubmit={submit} className="panel flex flex-col gap-4 p-4" noValidate data-testid="inputs-form">
       <div className="flex items-center justify-between">
         <h2 className="h2">Inputs</h2>
+        <label className="ml-auto mr-3 flex items-center gap-1 text-xs text-ink/70">
+          Units
+          <select className="field w-auto py-0.5" value={system} onChange={(e) => switchUnits(e.target.value as UnitSystem)} aria-label="Units of the inputs">
+            <option value="SI">SI (mm, N)</option>
+            <option value="US">US (in, lbf)</option>
+          </select>
+        </label>
         {editable && (
           <button type="submit" className="btn" disabled={pending}>
             {pending ? 'Running…' : 'Save and run'}
@@ -105,7 +120,7 @@ export function InputsForm(props: { projectId: string; calcId: string; calcType:
       <Group title="Geometry">{GEOMETRY_FIELDS[calcType].map(field)}</Group>
       <Group title="Stroke">{STROKE_FIELDS.map(field)}</Group>
       <fieldset className="flex flex-col gap-2 border-t border-rule pt-3">
-        <legend className="h2 pr-2">Load cases at the tracer [N]</legend>
+        <legend className="h2 pr-2">Load cases at the tracer [{system === 'US' ? 'lbf' : 'N'}]</legend>
         {loads.fields.map((f, i) => (
           <div key={f.id} className="grid grid-cols-[1fr_5rem_5rem_auto] items-start gap-2">
             {(['name', 'fx', 'fy'] as const).map((k) => {
