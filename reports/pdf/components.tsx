@@ -14,6 +14,7 @@ import { PdfPage, SectionHead } from './frame'
 import { MathBlock } from './math'
 import { A, Code, Em, H2, H3, LI, MathInline, OL, P, Strong, UL } from './prose'
 import { PdfOtherSteps, PdfStep, PdfSteps } from './steps'
+import { segmentBody } from './flow'
 import { C } from './styles'
 
 type SectionProps = ReportComponentProps['Section']
@@ -64,6 +65,13 @@ interface Placed {
   body: ReactNode
 }
 
+/** What one <Page> holds: section bodies, each with its heading unless it carries on a cut section. */
+interface PageItem {
+  key: string
+  head?: Placed
+  body: ReactNode
+}
+
 /**
  * MDX hands its wrapper one element, the compiled content, not the sections.
  * That content function is pure (props in, elements out, no hooks), so it is
@@ -95,18 +103,22 @@ function Paginate({ children, document }: { children?: ReactNode; document: (pag
       }
     }
   }
-  const pages: Placed[][] = []
+  const pages: PageItem[][] = []
   for (const sec of placed) {
-    if (sec.continues && pages.length) pages[pages.length - 1].push(sec)
-    else pages.push([sec])
+    const startsPage = !(sec.continues && pages.length)
+    const [first, ...rest] = segmentBody(sec.body, ctx, startsPage)
+    const item: PageItem = { key: sec.id, head: sec, body: first }
+    if (startsPage) pages.push([item])
+    else pages[pages.length - 1].push(item)
+    rest.forEach((body, i) => pages.push([{ key: `${sec.id}-${i + 1}`, body }]))
   }
   return document(
-    pages.map((secs) => (
-      <PdfPage key={secs[0].id}>
-        {secs.map((sec, i) => (
-          <View key={sec.id}>
-            <SectionHead id={sec.id} number={sec.number} title={sec.title} first={i === 0} />
-            {sec.body}
+    pages.map((items) => (
+      <PdfPage key={items[0].key}>
+        {items.map((it, i) => (
+          <View key={it.key}>
+            {it.head ? <SectionHead id={it.head.id} number={it.head.number} title={it.head.title} first={i === 0} /> : null}
+            {it.body}
           </View>
         ))}
       </PdfPage>
