@@ -39,8 +39,12 @@ const ARITY: Record<string, number> = { M: 2, L: 2, H: 1, V: 1, C: 6, S: 4, Q: 4
 
 /**
  * Rewrites path data through `m`. Every command becomes absolute, H/V become
- * L, and smooth curves (S/T) become explicit C/Q: react-pdf expands smooth
- * quadratics slowly, and MathJax glyphs are full of them.
+ * L, and smooth curves (S/T) become explicit curves: react-pdf expands smooth
+ * quadratics slowly, and MathJax glyphs are full of them. Quadratics leave as
+ * their exact cubics, since pdfkit writes a Q as the PDF `v` operator, which
+ * is a different curve and visibly dents glyph outlines. Segments that vanish
+ * at whole units and flat curves are dropped or drawn as lines: glyphs carry
+ * many of both, and every operator costs layout, render and file size.
  */
 export function transformPath(d: string, m: Affine): string {
   const tokens = d.match(/[A-Za-z]|-?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?/g) ?? []
@@ -55,6 +59,8 @@ export function transformPath(d: string, m: Affine): string {
   let qx = 0
   let qy = 0
   let last = ''
+  // Where the emitted outline stands, in rounded output units.
+  const pen: [number, number] = [NaN, NaN]
   while (i < tokens.length) {
     if (/[A-Za-z]/.test(tokens[i])) cmd = tokens[i++]
     const up = cmd.toUpperCase()
@@ -66,6 +72,7 @@ export function transformPath(d: string, m: Affine): string {
       last = 'Z'
       cx = sx
       cy = sy
+      ;[pen[0], pen[1]] = apply(m, sx, sy).map(Math.round)
       continue
     }
     const a = tokens.slice(i, i + n).map(Number)
@@ -82,7 +89,7 @@ export function transformPath(d: string, m: Affine): string {
       pts.unshift(reflected)
       letter = up === 'T' ? 'Q' : 'C'
     }
-    out.push(letter + pts.map(([x, y]) => apply(m, x, y).map(r).join(' ')).join(' '))
+    emit(out, letter, pts.map(([x, y]) => apply(m, x, y).map(Math.round) as [number, number]), pen)
     if (letter === 'Q' || letter === 'C') [qx, qy] = pts[pts.length - 2]
     last = letter
     ;[cx, cy] = pts[pts.length - 1]
@@ -94,6 +101,34 @@ export function transformPath(d: string, m: Affine): string {
     }
   }
   return out.join('')
+}
+
+type Pt = [number, number]
+
+/** Twice the area of triangle a-b-c: zero when c lies on the line through a and b. */
+const cross = (a: Pt, b: Pt, c: Pt) => (b[0] - a[0]) * (c[1] - a[1]) - (b[1] - a[1]) * (c[0] - a[0])
+const same = (a: Pt, b: Pt) => a[0] === b[0] && a[1] === b[1]
+
+function emit(out: string[], letter: string, pts: Pt[], pen: Pt): void {
+  const end = pts[pts.length - 1]
+  const put = (l: string, ps: Pt[]) => {
+    out.push(l + ps.map((p) => `${r(p[0])} ${r(p[1])}`).join(' '))
+    pen[0] = end[0]
+    pen[1] = end[1]
+  }
+  if (letter === 'M') return put('M', pts)
+  if (pts.every((p) => same(p, pen))) return
+  const chord = Math.hypot(end[0] - pen[0], end[1] - pen[1])
+  // Control points within half a unit of the chord: the curve is a line at this resolution.
+  const flat = (c: Pt) => chord > 0 && Math.abs(cross(pen, end, c)) / chord < 0.5
+  if (letter === 'L' || (letter !== 'L' && pts.slice(0, -1).every(flat))) return put('L', [end])
+  if (letter === 'Q') {
+    const [q] = pts
+    const c1: Pt = [pen[0] + (2 / 3) * (q[0] - pen[0]), pen[1] + (2 / 3) * (q[1] - pen[1])]
+    const c2: Pt = [end[0] + (2 / 3) * (q[0] - end[0]), end[1] + (2 / 3) * (q[1] - end[1])]
+    return put('C', [c1.map(Math.round) as Pt, c2.map(Math.round) as Pt, end])
+  }
+  put('C', pts)
 }
 
 export function rectPath(x: number, y: number, w: number, h: number, m: Affine): string {

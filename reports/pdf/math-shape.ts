@@ -10,10 +10,17 @@ import { liteAdaptor, type LiteAdaptor } from 'mathjax-full/js/adaptors/liteAdap
 import { RegisterHTMLHandler } from 'mathjax-full/js/handlers/html.js'
 import { AllPackages } from 'mathjax-full/js/input/tex/AllPackages.js'
 import type { LiteElement, LiteNode } from 'mathjax-full/js/adaptors/lite/Element.js'
-import { type Affine, IDENTITY, multiply, parseTransform, rectPath, transformPath } from './affine'
+import { type Affine, multiply, parseTransform, rectPath, transformPath } from './affine'
+
+/**
+ * Outline coordinates are written in units of GRID/1000 em: 1/200 em is
+ * 0.05 pt at 10 pt, far below what paper or a zoomed screen shows, and it
+ * saves digits and lets MathJax's many tiny segments collapse away.
+ */
+const GRID = 5
 
 export interface MathShape {
-  /** viewBox in MathJax units (1000 = 1 em). */
+  /** viewBox in outline units (200 = 1 em). */
   viewBox: [number, number, number, number]
   /** Sizes in em. */
   width: number
@@ -51,9 +58,10 @@ export function texToShape(tex: string, display: boolean): MathShape {
   const svg = adaptor.firstChild(container) as LiteElement
   const vb = (adaptor.getAttribute(svg, 'viewBox') ?? '0 0 0 0').split(/\s+/).map(Number) as [number, number, number, number]
   const parts: string[] = []
-  for (const child of adaptor.childNodes(svg)) collect(adaptor, child, IDENTITY, parts)
+  const toGrid: Affine = [1 / GRID, 0, 0, 1 / GRID, 0, 0]
+  for (const child of adaptor.childNodes(svg)) collect(adaptor, child, toGrid, parts)
   const shape: MathShape = {
-    viewBox: vb,
+    viewBox: vb.map((v) => v / GRID) as MathShape['viewBox'],
     width: vb[2] / 1000,
     ascent: -vb[1] / 1000,
     descent: (vb[3] + vb[1]) / 1000,
