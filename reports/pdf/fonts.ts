@@ -3,12 +3,15 @@
  * not WOFF: fontkit parses TTF markedly faster. Hyphenation is switched off so
  * words never split unpredictably across lines.
  */
-import { join } from 'node:path'
+import { createRequire } from 'node:module'
+import { dirname, join } from 'node:path'
 import { Font } from '@react-pdf/renderer'
 import type { RenderOptions } from '../types'
 
 export const SANS = 'Noto Sans'
 export const MONO = 'Noto Sans Mono'
+/** Digits inside formulas (see math-shape.ts): KaTeX's copy of the TeX roman face, shipped with katex. */
+export const MATH_DIGITS = 'KaTeX Main'
 /** The text stack: Sans, with Mono filling in the symbols the Sans subset lacks. */
 export const TEXT_STACK = [SANS, MONO]
 
@@ -24,7 +27,14 @@ const VARIANTS = [
   { fontFamily: MONO, fontWeight: 700, fontStyle: 'normal' },
   { fontFamily: MONO, fontWeight: 400, fontStyle: 'italic' },
   { fontFamily: MONO, fontWeight: 700, fontStyle: 'italic' },
+  { fontFamily: MATH_DIGITS, fontWeight: 400, fontStyle: 'normal' },
 ] as const
+
+/** Resolved from wherever `katex` is installed, so the bundled module finds it too. */
+function katexFont(file: string, opts: RenderOptions): string {
+  const req = createRequire(join(opts.rootDir ?? process.cwd(), 'package.json'))
+  return join(dirname(req.resolve('katex/package.json')), 'dist', 'fonts', file)
+}
 
 export function fontsDir(opts: RenderOptions = {}): string {
   return opts.fontsDir ?? join(opts.rootDir ?? process.cwd(), 'fonts')
@@ -54,6 +64,7 @@ export function registerFonts(opts: RenderOptions = {}): void {
       { src: f('NotoSansMono-Bold.ttf'), fontWeight: 700, fontStyle: 'italic' },
     ],
   })
+  Font.register({ family: MATH_DIGITS, src: katexFont('KaTeX_Main-Regular.ttf', opts), fontWeight: 400, fontStyle: 'normal' })
   Font.registerHyphenationCallback((word) => [word])
   registered = dir
   prepared = null

@@ -27,6 +27,20 @@ export interface MathShape {
   ascent: number
   descent: number
   d: string
+  /** Numbers set as text (see `asNumber`), in outline units, baseline-left origin. */
+  numbers: MathNumber[]
+}
+
+export interface MathNumber {
+  x: number
+  y: number
+  size: number
+  text: string
+}
+
+interface Sink {
+  d: string[]
+  numbers: MathNumber[]
 }
 
 type Doc = ReturnType<typeof mathjax.document>
@@ -57,26 +71,57 @@ export function texToShape(tex: string, display: boolean): MathShape {
   const container = doc.convert(clean, { display }) as LiteElement
   const svg = adaptor.firstChild(container) as LiteElement
   const vb = (adaptor.getAttribute(svg, 'viewBox') ?? '0 0 0 0').split(/\s+/).map(Number) as [number, number, number, number]
-  const parts: string[] = []
+  const sink: Sink = { d: [], numbers: [] }
   const toGrid: Affine = [1 / GRID, 0, 0, 1 / GRID, 0, 0]
-  for (const child of adaptor.childNodes(svg)) collect(adaptor, child, toGrid, parts)
+  for (const child of adaptor.childNodes(svg)) collect(adaptor, child, toGrid, sink)
   const shape: MathShape = {
     viewBox: vb.map((v) => v / GRID) as MathShape['viewBox'],
     width: vb[2] / 1000,
     ascent: -vb[1] / 1000,
     descent: (vb[3] + vb[1]) / 1000,
-    d: parts.join(''),
+    d: sink.d.join(''),
+    numbers: sink.numbers,
   }
   cache.set(key, shape)
   return shape
 }
 
-function collect(adaptor: LiteAdaptor, node: LiteNode, m: Affine, out: string[]): void {
+/** Upright digits and the decimal point, as MathJax tags them (data-c is the code point in hex). */
+const NUMBER_GLYPH = /^(3[0-9]|2E)$/
+
+/**
+ * A number (`mn`) of plain digits comes back as text instead of outlines. The
+ * substituted values of real steps are mostly numbers, and outlines cost about
+ * 4 kB a digit; as text they cost a few bytes, and a reader can search and copy
+ * them. KaTeX_Main has MathJax's digit shapes and advances (0.5 em, point
+ * 0.278 em), so the run lands where the outlines would have been.
+ */
+function asNumber(adaptor: LiteAdaptor, el: LiteElement, m: Affine): MathNumber | null {
+  if (adaptor.getAttribute(el, 'data-mml-node') !== 'mn' || m[1] !== 0 || m[2] !== 0 || Math.abs(m[0] + m[3]) > 1e-9) return null
+  let text = ''
+  for (const child of adaptor.childNodes(el)) {
+    if (adaptor.kind(child) !== 'path') return null
+    const c = adaptor.getAttribute(child as LiteElement, 'data-c') ?? ''
+    if (!NUMBER_GLYPH.test(c)) return null
+    text += String.fromCharCode(parseInt(c, 16))
+  }
+  if (!text) return null
+  // The root flips y, so m[3] is negative: the text itself is drawn upright at the baseline.
+  return { x: m[4], y: m[5], size: 1000 * m[0], text }
+}
+
+function collect(adaptor: LiteAdaptor, node: LiteNode, m: Affine, sink: Sink): void {
   if (adaptor.kind(node) === '#text' || adaptor.kind(node) === '#comment') return
   const el = node as LiteElement
   const kind = adaptor.kind(el)
   const num = (name: string) => Number(adaptor.getAttribute(el, name) ?? 0)
   let here = multiply(m, parseTransform(adaptor.getAttribute(el, 'transform')))
+  const number = kind === 'g' ? asNumber(adaptor, el, here) : null
+  if (number) {
+    sink.numbers.push(number)
+    return
+  }
+  const out = sink.d
   if (kind === 'svg') {
     // Nested svg (e.g. stretchy delimiters): position, then map its viewBox to its size.
     const vb = (adaptor.getAttribute(el, 'viewBox') ?? '').split(/\s+/).map(Number)
@@ -103,5 +148,5 @@ function collect(adaptor: LiteAdaptor, node: LiteNode, m: Affine, out: string[])
       : rectPath(x1 - w / 2, Math.min(y1, y2), w, Math.abs(y2 - y1), here))
     return
   }
-  for (const child of adaptor.childNodes(el)) collect(adaptor, child, here, out)
+  for (const child of adaptor.childNodes(el)) collect(adaptor, child, here, sink)
 }
