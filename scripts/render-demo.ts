@@ -1,7 +1,7 @@
 /**
- * Renders the fixture packages to out/demo: PDFs (A4 and US Letter, a draft
- * Hart package, one with an appended attachment), their pages as PNGs for a
- * visual check, and the standalone web document.
+ * Renders every demo calc (the seed's inputs run through the real engine and checks) and the
+ * report fixtures to out/demo: PDFs (A4 and US Letter, a draft, one with an appended
+ * attachment), their pages as PNGs for a visual check, and the standalone web document.
  */
 import { execFileSync } from 'node:child_process'
 import { mkdirSync, rmSync, writeFileSync } from 'node:fs'
@@ -10,6 +10,13 @@ import { PDFDocument, StandardFonts } from 'pdf-lib'
 import { renderPdf, renderWebDocument, type ReportPackage } from '../reports/index'
 import { peaucellierPackage } from '../tests/reports/fixtures/peaucellier'
 import { hartPackage } from '../tests/reports/fixtures/hart'
+import { TEMPLATE_VERSION } from '../db/report-package'
+import { DEMO_CALCS, demoPackage as demoFixture } from '../tests/reports/fixtures/demo'
+
+/** A demo calc as it would be issued, built without a database; the app's template version. */
+function demoPackage(c: (typeof DEMO_CALCS)[number], paper: ReportPackage['paper']): ReportPackage {
+  return { ...demoFixture(c, paper), templateVersion: TEMPLATE_VERSION }
+}
 
 async function sampleAttachment(): Promise<Uint8Array> {
   const doc = await PDFDocument.create()
@@ -28,6 +35,8 @@ async function main() {
   const withAttachment = peaucellierPackage({ state: 'in-check' })
   withAttachment.attachments = [{ name: 'Pin material certificate.pdf', bytes: await sampleAttachment() }]
   const jobs: [string, ReportPackage][] = [
+    ...DEMO_CALCS.map((c): [string, ReportPackage] => [`demo-${c.number}`, demoPackage(c, 'A4')]),
+    [`demo-${DEMO_CALCS[0].number}-letter`, demoPackage(DEMO_CALCS[0], 'LETTER')],
     ['peaucellier-a4', peaucellierPackage({ paper: 'A4' })],
     ['peaucellier-letter', peaucellierPackage({ paper: 'LETTER' })],
     ['peaucellier-in-check-attachment', withAttachment],

@@ -1,16 +1,20 @@
 /**
- * Report rendering speed: the demo package to PDF cold and warm (median),
- * peak memory, page count, the web HTML, and as a yardstick the same HTML
- * printed to PDF by headless Chromium. Run alone with `tsx scripts/bench/render.ts`.
+ * Report rendering speed for the real demo calcs (seed inputs run through the engine and
+ * checks) and the hand-made fixture: PDF cold (first render in a fresh process) and warm
+ * (median), CPU time, pages, bytes, web HTML time, and as a yardstick the same HTML printed
+ * to PDF by headless Chromium. Each package runs in its own process so "cold" is honest.
+ * Run alone (the machine is shared): `NODE_ENV=production tsx scripts/bench/render.ts [name…]`.
  */
 import { execFileSync } from 'node:child_process'
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
-import { pathToFileURL } from 'node:url'
+import { fileURLToPath, pathToFileURL } from 'node:url'
+import type { ReportPackage } from '../../reports/types'
 
-const WARM_RUNS = 7
+const WARM_RUNS = 5
 const CHROMIUM = '/usr/bin/chromium'
+const NAMES = ['LC-001', 'LC-002', 'LC-003', 'fixture']
 
 function median(xs: number[]): number {
   const s = [...xs].sort((a, b) => a - b)
@@ -27,15 +31,38 @@ async function timed<T>(fn: () => Promise<T>): Promise<{ ms: number; cpuMs: numb
 
 const fmt = (ms: number) => `${Math.round(ms)} ms`
 
-export default async function bench(): Promise<void> {
-  // React picks its build when first loaded; the production build is the one that ships.
-  const env = process.env as Record<string, string | undefined>
-  env.NODE_ENV ??= 'production'
-  const { renderPdf, renderWebHtml, renderWebDocument } = await import('../../reports/index')
-  const { PDFDocument } = await import('pdf-lib')
-  const { peaucellierPackage } = await import('../../tests/reports/fixtures/peaucellier')
-  const pkg = peaucellierPackage()
+async function packageNamed(name: string): Promise<ReportPackage> {
+  if (name === 'fixture') return (await import('../../tests/reports/fixtures/peaucellier')).peaucellierPackage()
+  const { demoPackage, demoCalc } = await import('../../tests/reports/fixtures/demo')
+  return demoPackage(demoCalc(name))
+}
 
+function chromiumMs(html: string): string {
+  const dir = mkdtempSync(join(tmpdir(), 'inverso-bench-'))
+  try {
+    const file = join(dir, 'report.html')
+    const pdf = join(dir, 'chromium.pdf')
+    writeFileSync(file, html)
+    const t0 = performance.now()
+    execFileSync(CHROMIUM, [
+      '--headless', '--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking',
+      '--disable-component-update', '--disable-sync', '--no-pdf-header-footer', `--print-to-pdf=${pdf}`, pathToFileURL(file).href,
+    ], { stdio: 'ignore', timeout: 120_000 })
+    const ms = performance.now() - t0
+    const pages = (readFileSync(pdf).toString('latin1').match(/\/Type\s*\/Page[^s]/g) ?? []).length
+    return `${fmt(ms)} (process start included), ${pages} pages`
+  } catch (err) {
+    return `not usable here (${(err as Error).message.split('\n')[0]})`
+  } finally {
+    rmSync(dir, { recursive: true, force: true })
+  }
+}
+
+/** One package in this process: the first render here is the cold one. */
+async function benchOne(name: string): Promise<void> {
+  const { renderPdf, renderWebDocument } = await import('../../reports/index')
+  const { PDFDocument } = await import('pdf-lib')
+  const pkg = await packageNamed(name)
   const cold = await timed(() => renderPdf(pkg))
   const pages = (await PDFDocument.load(cold.value)).getPageCount()
   const warm: number[] = []
@@ -45,38 +72,27 @@ export default async function bench(): Promise<void> {
     warm.push(r.ms)
     warmCpu.push(r.cpuMs)
   }
-  const webCold = await timed(() => renderWebHtml(peaucellierPackage({ paper: 'LETTER' })))
-  const web: number[] = []
-  for (let i = 0; i < 5; i++) web.push((await timed(() => renderWebHtml(pkg))).ms)
-  const mem = process.memoryUsage()
-  const maxRssMb = process.resourceUsage().maxRSS / 1024
+  const html = await renderWebDocument(pkg)
+  const web = median(await Promise.all([0, 1, 2].map(async () => (await timed(() => renderWebDocument(pkg))).ms)))
+  console.log(`${name}: ${pages} pages, ${(cold.value.length / 1024).toFixed(0)} kB (${pkg.paper})`)
+  console.log(`  pdf  cold ${fmt(cold.ms)} (cpu ${fmt(cold.cpuMs)}); warm median ${fmt(median(warm))} of ${WARM_RUNS} (cpu ${fmt(median(warmCpu))}; min ${fmt(Math.min(...warm))}, max ${fmt(Math.max(...warm))})`)
+  console.log(`  web  warm median ${fmt(web)}; peak RSS ${(process.resourceUsage().maxRSS / 1024).toFixed(0)} MB`)
+  console.log(`  yardstick: Chromium print-to-pdf of the web HTML ${chromiumMs(html)}`)
+}
 
-  console.log(`NODE_ENV=${process.env.NODE_ENV}; demo package, ${pages} pages (${pkg.paper})`)
-  console.log(`pdf  cold ${fmt(cold.ms)} (cpu ${fmt(cold.cpuMs)})`)
-  console.log(`pdf  warm median ${fmt(median(warm))} of ${WARM_RUNS} (cpu ${fmt(median(warmCpu))}; min ${fmt(Math.min(...warm))}, max ${fmt(Math.max(...warm))})`)
-  console.log(`web  cold ${fmt(webCold.ms)}, warm median ${fmt(median(web))}`)
-  console.log(`mem  peak RSS ${maxRssMb.toFixed(0)} MB, heap used now ${(mem.heapUsed / 2 ** 20).toFixed(0)} MB`)
-
-  const dir = mkdtempSync(join(tmpdir(), 'inverso-bench-'))
-  try {
-    const html = join(dir, 'report.html')
-    const pdf = join(dir, 'chromium.pdf')
-    writeFileSync(html, await renderWebDocument(pkg))
-    const t0 = performance.now()
-    execFileSync(CHROMIUM, [
-      '--headless', '--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking',
-      '--disable-component-update', '--disable-sync', '--no-pdf-header-footer', `--print-to-pdf=${pdf}`, pathToFileURL(html).href,
-    ], { stdio: 'ignore', timeout: 120_000 })
-    const ms = performance.now() - t0
-    const chromePages = (await PDFDocument.load(readFileSync(pdf))).getPageCount()
-    console.log(`yardstick: Chromium print-to-pdf of the web HTML ${fmt(ms)} (process start included), ${chromePages} pages`)
-  } catch (err) {
-    console.log(`yardstick: Chromium not usable here (${(err as Error).message.split('\n')[0]})`)
-  } finally {
-    rmSync(dir, { recursive: true, force: true })
+export default async function bench(names: string[] = NAMES): Promise<void> {
+  const self = fileURLToPath(import.meta.url)
+  console.log(`NODE_ENV=${process.env.NODE_ENV ?? '(unset: production used)'}`)
+  for (const name of names) {
+    execFileSync(process.execPath, ['--import', 'tsx', self, '--one', name], {
+      stdio: 'inherit',
+      env: { ...process.env, NODE_ENV: process.env.NODE_ENV ?? 'production' },
+    })
   }
 }
 
 if (import.meta.url === pathToFileURL(process.argv[1] ?? '').href) {
-  await bench()
+  const args = process.argv.slice(2)
+  if (args[0] === '--one') await benchOne(args[1])
+  else await bench(args.length ? args : NAMES)
 }
