@@ -81,14 +81,51 @@ export function lineCount(words: { text: string; size: number; face: Face }[], w
   return lines
 }
 
-function mathBox(tex: string | undefined): { width: number; height: number } {
-  if (!tex) return { width: 0, height: 0 }
+/** Space kept between the substituted values and a result beside them. */
+const RESULT_GAP = 12
+
+export interface StepLayout {
+  /** Font size of each formula: shrunk (to no less than 70 %) when it is wider than its column. */
+  formulaSize: number
+  substitutedSize: number
+  /** The result sits under the substituted values instead of beside them. */
+  resultBelow: boolean
+}
+
+function mathWidth(tex: string | undefined, size: number): number {
+  return tex ? texToShape(tex, true).width * size : 0
+}
+
+function mathHeight(tex: string | undefined, size: number): number {
+  if (!tex) return 0
   const m = texToShape(tex, true)
-  return { width: m.width * STEP.mathSize, height: (m.ascent + m.descent) * STEP.mathSize }
+  return (m.ascent + m.descent) * size
+}
+
+const fit = (tex: string | undefined, room: number) => {
+  const w = mathWidth(tex, STEP.mathSize)
+  return w > room ? Math.max(0.7, room / w) * STEP.mathSize : STEP.mathSize
+}
+
+function resultWidth(v: StepView): number {
+  return textWidth(STEP.resultLabel, STEP.keySize, { family: SANS }) + textWidth(v.result || '—', STEP.resultSize, { family: SANS, bold: true })
+}
+
+/** Decisions PdfStepBox and stepHeight share, so the estimate sees the box that is drawn. */
+export function stepLayout(v: StepView, paper: Paper): StepLayout {
+  const column = contentWidth(paper) - STEP.border - STEP.padLeft - STEP.numberWidth - STEP.keyWidth
+  const substitutedSize = fit(v.substituted, column)
+  return {
+    formulaSize: fit(v.formula, column),
+    substitutedSize,
+    // A result that would have to wrap beside the values reads better whole on the next row.
+    resultBelow: mathWidth(v.substituted, substitutedSize) + RESULT_GAP + resultWidth(v) > column,
+  }
 }
 
 export function stepHeight(v: StepView, paper: Paper): number {
   const inner = contentWidth(paper) - STEP.border - STEP.padLeft - STEP.numberWidth
+  const layout = stepLayout(v, paper)
   // The key labels set no line height, so they inherit the page's, already resolved to points at body size.
   const key = BODY_SIZE * LINE
   const badge = v.verdictLabel ? textWidth(v.verdictLabel, STEP.badgeSize, { family: SANS, bold: true }) + 2 * STEP.badgePadX : 0
@@ -97,13 +134,16 @@ export function stepHeight(v: StepView, paper: Paper): number {
     inner - badge,
   )
   let h = Math.max(titleLines * STEP.titleSize * STEP.tight, v.verdictLabel ? STEP.badgeSize * STEP.tight + 1 : 0)
-  if (v.formula) h += STEP.rowGap + Math.max(key, mathBox(v.formula).height)
-  const sub = mathBox(v.substituted)
-  const resultLines = lineCount(
-    [{ text: STEP.resultLabel, size: STEP.keySize, face: { family: SANS } }, { text: v.result || '—', size: STEP.resultSize, face: { family: SANS, bold: true } }],
-    Math.max(40, inner - STEP.keyWidth - sub.width),
-  )
-  h += STEP.rowGap + Math.max(key, sub.height, resultLines * STEP.resultSize * STEP.tight)
+  if (v.formula) h += STEP.rowGap + Math.max(key, mathHeight(v.formula, layout.formulaSize))
+  const result = [{ text: STEP.resultLabel, size: STEP.keySize, face: { family: SANS } }, { text: v.result || '—', size: STEP.resultSize, face: { family: SANS, bold: true } }]
+  const subHeight = mathHeight(v.substituted, layout.substitutedSize)
+  if (layout.resultBelow) {
+    h += STEP.rowGap + Math.max(key, subHeight)
+    h += STEP.rowGap + lineCount(result, inner - STEP.keyWidth) * STEP.resultSize * STEP.tight
+  } else {
+    const room = inner - STEP.keyWidth - mathWidth(v.substituted, layout.substitutedSize)
+    h += STEP.rowGap + Math.max(key, subHeight, lineCount(result, room) * STEP.resultSize * STEP.tight)
+  }
   const sourceLines = lineCount([{ text: v.source ?? '—', size: STEP.sourceSize, face: { family: SANS } }], inner - STEP.keyWidth)
   h += STEP.rowGap + Math.max(key, sourceLines * STEP.sourceSize * STEP.sourceLine)
   if (v.note) h += lineCount([{ text: v.note, size: STEP.noteSize, face: { family: SANS, italic: true } }], inner) * STEP.noteSize * STEP.tight

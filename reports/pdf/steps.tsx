@@ -5,7 +5,7 @@ import { useReport } from '../model/react-context'
 import { stepView, type StepView } from '../model/views'
 import { MathSvg } from './math'
 import { MONO } from './fonts'
-import { STEP } from './measure'
+import { STEP, stepLayout } from './measure'
 import { C } from './styles'
 
 const VERDICT_COLOUR: Record<string, string> = { pass: C.pass, fail: C.fail, warn: C.warn, info: C.muted }
@@ -16,10 +16,17 @@ const ROW = { flexDirection: 'row' as const, alignItems: 'center' as const, marg
 /**
  * Title line (with the step id), formula, values with the result in a fixed
  * right-hand column, source. Kept flat: react-pdf's cost grows with nodes.
- * Sizes come from STEP because `stepHeight` predicts this box's height.
+ * Sizes come from STEP and stepLayout because `stepHeight` predicts this box's height.
  */
 export function PdfStepBox({ v }: { v: StepView }) {
   const colour = VERDICT_COLOUR[v.verdict ?? 'info']
+  const layout = stepLayout(v, useReport().pkg.paper)
+  const result = (
+    <Text style={{ flex: 1, textAlign: 'right', fontSize: STEP.resultSize, fontWeight: 700, lineHeight: STEP.tight }}>
+      <Text style={{ fontSize: STEP.keySize, fontWeight: 400, color: C.muted }}>{STEP.resultLabel}</Text>
+      {v.result || '—'}
+    </Text>
+  )
   return (
     <View wrap={false} id={stepAnchor(v.id)} style={{ flexDirection: 'row', marginBottom: STEP.marginBottom, borderLeftWidth: STEP.border, borderLeftColor: colour, paddingLeft: STEP.padLeft, paddingVertical: STEP.padY }}>
       <Text style={{ width: STEP.numberWidth, fontSize: 9.5, fontWeight: 700, color: C.accent, lineHeight: STEP.tight }}>{v.n}</Text>
@@ -36,17 +43,21 @@ export function PdfStepBox({ v }: { v: StepView }) {
         {v.formula ? (
           <View style={ROW}>
             <Text style={KEY}>Formula</Text>
-            <MathSvg tex={v.formula} display size={STEP.mathSize} />
+            <MathSvg tex={v.formula} display size={layout.formulaSize} />
           </View>
         ) : null}
         <View style={ROW}>
           <Text style={KEY}>{v.substituted ? 'With values' : ''}</Text>
-          {v.substituted ? <MathSvg tex={v.substituted} display size={STEP.mathSize} /> : null}
-          <Text style={{ flex: 1, textAlign: 'right', fontSize: STEP.resultSize, fontWeight: 700, lineHeight: STEP.tight }}>
-            <Text style={{ fontSize: STEP.keySize, fontWeight: 400, color: C.muted }}>{STEP.resultLabel}</Text>
-            {v.result || '—'}
-          </Text>
+          {v.substituted ? <MathSvg tex={v.substituted} display size={layout.substitutedSize} /> : null}
+          {layout.resultBelow ? null : result}
         </View>
+        {/* A long substitution gets the row to itself; the result follows, never overlapping it. */}
+        {layout.resultBelow ? (
+          <View style={ROW}>
+            <View style={{ width: STEP.keyWidth }} />
+            {result}
+          </View>
+        ) : null}
         <View style={ROW}>
           <Text style={KEY}>Source</Text>
           <Text style={{ flex: 1, fontSize: STEP.sourceSize, lineHeight: STEP.sourceLine }}>{v.source ?? '—'}</Text>
