@@ -1,3 +1,5 @@
+import { DEFAULT_LINK, DEFAULT_PIN } from '@/lib/calc/defaults'
+
 /**
  * The demo scenario, invented for Inverso: Feldmark Maschinenbau builds a carton erector whose
  * flap pushers and glue heads ride on exact straight-line guides instead of linear rails.
@@ -17,16 +19,8 @@ export const DEMO_PROJECT = {
   client: 'Feldmark Maschinenbau (internal)',
 }
 
-const PINS = {
-  pinDiameter: 10,
-  holeDiameter: 10.5,
-  pinMaterial: 'C45+QT',
-  arrangement: 'double',
-  middle: { thickness: 8, material: 'S355' },
-  outer: { thickness: 5, material: 'S355' },
-  gap: 1,
-}
-const LINKS = { section: { shape: 'flat', width: 25, thickness: 8 }, material: 'S355', eye: { edgeAlong: 16 } }
+const PINS = DEFAULT_PIN
+const LINKS = DEFAULT_LINK
 
 export const DEMO_CALCS = [
   {
