@@ -1,6 +1,7 @@
 import { eq } from 'drizzle-orm'
 import { parseCalcInput, runCalc } from '@/lib/calc/run'
 import { audit } from './audit'
+import { withProjectMaterials } from './materials'
 import { db } from './index'
 import { calcs, type Calc } from './schema'
 
@@ -11,7 +12,8 @@ export type DraftOutcome = { ok: true; feasible: boolean; message: string } | { 
  * bad input is reported at its field and never replaces what was saved before. Saved revisions are
  * never touched: the working inputs become a revision only through saveRevision.
  */
-export async function saveDraftInputs(calc: Calc, values: unknown, userId: string): Promise<DraftOutcome> {
+export async function saveDraftInputs(calc: Calc, raw: unknown, userId: string): Promise<DraftOutcome> {
+  const values = await withProjectMaterials(calc.projectId, raw)
   const parsed = parseCalcInput(values)
   if (!parsed.ok) return parsed
   const run = runCalc(parsed.input)

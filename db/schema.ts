@@ -1,5 +1,6 @@
 import { sql } from 'drizzle-orm'
 import { index, integer, primaryKey, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core'
+import type { MaterialInput } from '@/lib/checks/schema'
 import type { ProjectRole, RevisionState } from '@/lib/review/roles'
 
 const id = () => text('id').primaryKey()
@@ -166,7 +167,7 @@ export const projectMaterials = sqliteTable(
       .notNull()
       .references(() => projects.id, { onDelete: 'cascade' }),
     name: text('name').notNull(),
-    data: text('data', { mode: 'json' }).notNull(),
+    data: text('data', { mode: 'json' }).$type<MaterialInput>().notNull(),
     source: text('source').notNull(),
     createdBy: text('created_by').references(() => users.id),
     createdAt: createdAt(),

@@ -21,11 +21,16 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
             {project.client} · you are {actor.role ? ROLE_LABELS[actor.role] : 'site administrator'}
           </div>
         </div>
-        {can(actor, 'member.manage') && (
-          <Link href={`/projects/${projectId}/members`} className="btn-quiet ml-auto" data-testid="manage-members">
-            Members
+        <div className="ml-auto flex gap-2">
+          <Link href={`/projects/${projectId}/materials`} className="btn-quiet">
+            Materials
           </Link>
-        )}
+          {can(actor, 'member.manage') && (
+            <Link href={`/projects/${projectId}/members`} className="btn-quiet" data-testid="manage-members">
+              Members
+            </Link>
+          )}
+        </div>
       </div>
       <section className="flex flex-col gap-2">
         <h2 className="h2">Calc register</h2>

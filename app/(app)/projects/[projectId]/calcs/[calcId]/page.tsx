@@ -13,6 +13,7 @@ import { MATERIALS } from '@/lib/checks'
 import { can } from '@/lib/review/permissions'
 import { CALC_TYPE_LABELS } from '@/lib/schemas/project'
 import { pendingAttachments } from '@/db/attachments'
+import { listProjectMaterials } from '@/db/materials'
 import { AttachmentsForm } from './attachments-form'
 import { InputsForm } from './inputs-form'
 import { listRemarks } from '@/db/remarks'
@@ -29,7 +30,7 @@ export default async function CalcPage({ params, searchParams }: Props) {
   const { project, actor } = await loadProjectContext(projectId)
   const calc = await getCalc(projectId, calcId)
   if (!calc) notFound()
-  const [revisions, pending] = await Promise.all([listRevisions(calcId), pendingAttachments(calcId)])
+  const [revisions, pending, ownMaterials] = await Promise.all([listRevisions(calcId), pendingAttachments(calcId), listProjectMaterials(projectId)])
   const shown = view === 'working' || revisions.length === 0 ? null : (revisions.find((r) => r.id === view) ?? revisions[0])
   if (view && view !== 'working' && !revisions.some((r) => r.id === view)) notFound()
 
@@ -83,7 +84,7 @@ export default async function CalcPage({ params, searchParams }: Props) {
             calcId={calcId}
             calcType={calc.calcType}
             initial={(calc.draftInputs ?? defaultCalcInputs(calc.calcType)) as Parameters<typeof InputsForm>[0]['initial']}
-            materials={Object.keys(MATERIALS)}
+            materials={[...Object.keys(MATERIALS), ...ownMaterials.map((m) => m.name)]}
             editable={can(actor, 'calc.edit')}
           />
           {can(actor, 'calc.edit') && <AttachmentsForm projectId={projectId} calcId={calcId} pending={pending.map((a) => ({ id: a.id, name: a.name, size: a.size }))} />}

@@ -1,0 +1,46 @@
+import { eq } from 'drizzle-orm'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { db } from '@/db'
+import { saveDraftInputs } from '@/db/calc-drafts'
+import { addProjectMaterial } from '@/db/materials'
+import { calcs, projects, users } from '@/db/schema'
+import { DEMO_CALCS, DEMO_USERS } from '@/db/seed/demo-data'
+import { seedDemo } from '@/db/seed/seed'
+import { AppError } from '@/lib/errors'
+import { useTempEnvironment } from '../helpers/temp-env'
+
+let env: Awaited<ReturnType<typeof useTempEnvironment>>
+let projectId = ''
+let engineerId = ''
+beforeAll(async () => {
+  env = await useTempEnvironment()
+  await seedDemo(db)
+  projectId = (await db.select().from(projects))[0].id
+  engineerId = (await db.select().from(users).where(eq(users.email, DEMO_USERS[1].email)))[0].id
+})
+afterAll(() => env.close())
+
+// S460 values as a member would copy them from a mill certificate (invented for this test).
+const own = { kind: 'steel', fy: 460, fu: 540, E: 210000, density: 7850, source: 'Mill certificate 3.1 no. 4711 (test data)' }
+
+describe('project materials', () => {
+  it('needs a source and strength values, reported at the field', async () => {
+    const noSource = await addProjectMaterial(projectId, 'S460 bar', { ...own, source: '' }, engineerId).catch((e: AppError) => e)
+    expect((noSource as AppError).fieldErrors?.source).toMatch(/source is required/)
+    const noStrength = await addProjectMaterial(projectId, 'S460 bar', { kind: 'steel', E: 210000, source: 'x-source' }, engineerId).catch((e: AppError) => e)
+    expect((noStrength as AppError).fieldErrors?.fy).toMatch(/no strength values/)
+    const library = await addProjectMaterial(projectId, 'S355', own, engineerId).catch((e: AppError) => e)
+    expect((library as AppError).fieldErrors?.name).toMatch(/library material/)
+  })
+
+  it('is copied into the inputs of a calc that names it, so the revision carries its values', async () => {
+    await addProjectMaterial(projectId, 'S460 bar', own, engineerId)
+    const [calc] = await db.select().from(calcs).where(eq(calcs.number, 'LC-003'))
+    const inputs = DEMO_CALCS[2].inputs
+    const values = { ...inputs, defaults: { ...inputs.defaults, link: { ...inputs.defaults.link, material: 'S460 bar' } } }
+    const outcome = await saveDraftInputs(calc, values, engineerId)
+    expect(outcome.ok).toBe(true)
+    const [saved] = await db.select().from(calcs).where(eq(calcs.id, calc.id))
+    expect((saved.draftInputs as { materials: Record<string, { fy: number; source: string }> }).materials['S460 bar']).toMatchObject({ fy: 460, source: own.source })
+  })
+})
