@@ -10,8 +10,9 @@ import type { RenderOptions } from '../types'
 
 export const SANS = 'Noto Sans'
 export const MONO = 'Noto Sans Mono'
-/** Digits inside formulas (see math-shape.ts): KaTeX's copy of the TeX roman face, shipped with katex. */
-export const MATH_DIGITS = 'KaTeX Main'
+/** Glyph runs inside formulas (see math-text.ts): KaTeX's copies of the TeX faces, shipped with katex. */
+export const MATH_MAIN = 'KaTeX Main'
+export const MATH_ITALIC = 'KaTeX Math Italic'
 /** The text stack: Sans, with Mono filling in the symbols the Sans subset lacks. */
 export const TEXT_STACK = [SANS, MONO]
 
@@ -27,7 +28,8 @@ const VARIANTS = [
   { fontFamily: MONO, fontWeight: 700, fontStyle: 'normal' },
   { fontFamily: MONO, fontWeight: 400, fontStyle: 'italic' },
   { fontFamily: MONO, fontWeight: 700, fontStyle: 'italic' },
-  { fontFamily: MATH_DIGITS, fontWeight: 400, fontStyle: 'normal' },
+  { fontFamily: MATH_MAIN, fontWeight: 400, fontStyle: 'normal' },
+  { fontFamily: MATH_ITALIC, fontWeight: 400, fontStyle: 'normal' },
 ] as const
 
 /** Resolved from wherever `katex` is installed, so the bundled module finds it too. */
@@ -64,7 +66,9 @@ export function registerFonts(opts: RenderOptions = {}): void {
       { src: f('NotoSansMono-Bold.ttf'), fontWeight: 700, fontStyle: 'italic' },
     ],
   })
-  Font.register({ family: MATH_DIGITS, src: katexFont('KaTeX_Main-Regular.ttf', opts), fontWeight: 400, fontStyle: 'normal' })
+  // The italic face is registered as its own upright family: formulas pick faces by glyph, not by style.
+  Font.register({ family: MATH_MAIN, src: katexFont('KaTeX_Main-Regular.ttf', opts), fontWeight: 400, fontStyle: 'normal' })
+  Font.register({ family: MATH_ITALIC, src: katexFont('KaTeX_Math-Italic.ttf', opts), fontWeight: 400, fontStyle: 'normal' })
   Font.registerHyphenationCallback((word) => [word])
   registered = dir
   prepared = null

@@ -10,6 +10,7 @@ import { liteAdaptor, type LiteAdaptor } from 'mathjax-full/js/adaptors/liteAdap
 import { RegisterHTMLHandler } from 'mathjax-full/js/handlers/html.js'
 import { AllPackages } from 'mathjax-full/js/input/tex/AllPackages.js'
 import type { LiteElement, LiteNode } from 'mathjax-full/js/adaptors/lite/Element.js'
+import { asText, type MathText } from './math-text'
 import { type Affine, multiply, parseTransform, rectPath, transformPath } from './affine'
 
 /**
@@ -27,20 +28,13 @@ export interface MathShape {
   ascent: number
   descent: number
   d: string
-  /** Numbers set as text (see `asNumber`), in outline units, baseline-left origin. */
-  numbers: MathNumber[]
-}
-
-export interface MathNumber {
-  x: number
-  y: number
-  size: number
-  text: string
+  /** Glyph runs set as text (see math-text.ts). */
+  texts: MathText[]
 }
 
 interface Sink {
   d: string[]
-  numbers: MathNumber[]
+  texts: MathText[]
 }
 
 type Doc = ReturnType<typeof mathjax.document>
@@ -71,7 +65,7 @@ export function texToShape(tex: string, display: boolean): MathShape {
   const container = doc.convert(clean, { display }) as LiteElement
   const svg = adaptor.firstChild(container) as LiteElement
   const vb = (adaptor.getAttribute(svg, 'viewBox') ?? '0 0 0 0').split(/\s+/).map(Number) as [number, number, number, number]
-  const sink: Sink = { d: [], numbers: [] }
+  const sink: Sink = { d: [], texts: [] }
   const toGrid: Affine = [1 / GRID, 0, 0, 1 / GRID, 0, 0]
   for (const child of adaptor.childNodes(svg)) collect(adaptor, child, toGrid, sink)
   const shape: MathShape = {
@@ -80,34 +74,10 @@ export function texToShape(tex: string, display: boolean): MathShape {
     ascent: -vb[1] / 1000,
     descent: (vb[3] + vb[1]) / 1000,
     d: sink.d.join(''),
-    numbers: sink.numbers,
+    texts: sink.texts,
   }
   cache.set(key, shape)
   return shape
-}
-
-/** Upright digits and the decimal point, as MathJax tags them (data-c is the code point in hex). */
-const NUMBER_GLYPH = /^(3[0-9]|2E)$/
-
-/**
- * A number (`mn`) of plain digits comes back as text instead of outlines. The
- * substituted values of real steps are mostly numbers, and outlines cost about
- * 4 kB a digit; as text they cost a few bytes, and a reader can search and copy
- * them. KaTeX_Main has MathJax's digit shapes and advances (0.5 em, point
- * 0.278 em), so the run lands where the outlines would have been.
- */
-function asNumber(adaptor: LiteAdaptor, el: LiteElement, m: Affine): MathNumber | null {
-  if (adaptor.getAttribute(el, 'data-mml-node') !== 'mn' || m[1] !== 0 || m[2] !== 0 || Math.abs(m[0] + m[3]) > 1e-9) return null
-  let text = ''
-  for (const child of adaptor.childNodes(el)) {
-    if (adaptor.kind(child) !== 'path') return null
-    const c = adaptor.getAttribute(child as LiteElement, 'data-c') ?? ''
-    if (!NUMBER_GLYPH.test(c)) return null
-    text += String.fromCharCode(parseInt(c, 16))
-  }
-  if (!text) return null
-  // The root flips y, so m[3] is negative: the text itself is drawn upright at the baseline.
-  return { x: m[4], y: m[5], size: 1000 * m[0], text }
 }
 
 function collect(adaptor: LiteAdaptor, node: LiteNode, m: Affine, sink: Sink): void {
@@ -116,9 +86,9 @@ function collect(adaptor: LiteAdaptor, node: LiteNode, m: Affine, sink: Sink): v
   const kind = adaptor.kind(el)
   const num = (name: string) => Number(adaptor.getAttribute(el, name) ?? 0)
   let here = multiply(m, parseTransform(adaptor.getAttribute(el, 'transform')))
-  const number = kind === 'g' ? asNumber(adaptor, el, here) : null
-  if (number) {
-    sink.numbers.push(number)
+  const text = kind === 'g' ? asText(adaptor, el, here) : null
+  if (text) {
+    sink.texts.push(text)
     return
   }
   const out = sink.d

@@ -3,7 +3,6 @@
  * sits on the text baseline and display math carries its number at the right.
  */
 import { Path, Svg, Text, View } from '@react-pdf/renderer'
-import { MATH_DIGITS } from './fonts'
 import { BODY_SIZE, C, LINE } from './styles'
 import { texToShape } from './math-shape'
 
@@ -12,8 +11,8 @@ export function MathSvg({ tex, display, size }: { tex: string; display: boolean;
   return (
     <Svg width={m.width * size} height={(m.ascent + m.descent) * size} viewBox={m.viewBox.join(' ')}>
       <Path d={m.d} fill={C.ink} />
-      {m.numbers.map((n, i) => (
-        <Text key={i} x={n.x} y={n.y} fill={C.ink} style={{ fontFamily: MATH_DIGITS, fontSize: n.size }}>{n.text}</Text>
+      {m.texts.map((t, i) => (
+        <Text key={i} x={t.x} y={t.y} fill={C.ink} style={{ fontFamily: t.family, fontSize: t.size }}>{t.text}</Text>
       ))}
     </Svg>
   )
