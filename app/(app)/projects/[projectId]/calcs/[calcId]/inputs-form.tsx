@@ -52,9 +52,9 @@ function Group({ title, children }: { title: string; children: React.ReactNode }
   )
 }
 
-/** NaN from an emptied number field would not survive serialisation; send null so the schema names the field. */
+/** An emptied number field reads as NaN: leave the key out, so an optional field is simply absent and a required one is named by the schema. */
 function clean(value: unknown): unknown {
-  if (typeof value === 'number' && Number.isNaN(value)) return null
+  if (typeof value === 'number' && Number.isNaN(value)) return undefined
   if (Array.isArray(value)) return value.map(clean)
   if (value && typeof value === 'object') return Object.fromEntries(Object.entries(value).map(([k, v]) => [k, clean(v)]))
   return value
