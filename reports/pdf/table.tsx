@@ -17,7 +17,8 @@ export function PdfTable({ view, size = 7.4, title = true }: { view: TableView; 
       {title ? <Text style={{ fontSize: 8.4, fontWeight: 700, marginBottom: 3 }} minPresenceAhead={40}>{view.title}</Text> : null}
       <View style={{ flexDirection: 'row', borderTopWidth: 0.9, borderBottomWidth: 0.6, borderColor: C.ink, backgroundColor: C.faint }} wrap={false} fixed>
         {view.headers.map((h, i) => (
-          <Text key={i} style={[cellStyle(i), { fontSize: size - 0.4, fontWeight: 700 }]}>{h}</Text>
+          // The unit gets its own line: left to textkit, "[N·mm]" breaks inside the bracket with a hyphen.
+          <Text key={i} style={[cellStyle(i), { fontSize: size - 0.4, fontWeight: 700 }]}>{h.replace(/ (\[[^\]]*\])$/, '\n$1')}</Text>
         ))}
       </View>
       {view.rows.map((row, r) => (
