@@ -11,6 +11,11 @@ export interface ComponentResult {
   steps: Step[]
 }
 
+/** The same 4 significant digits as `fmt`, as plain text (the value is printed, not typeset). */
+function plain(x: number): string {
+  return fmt(x).replace(/ \\cdot 10\^\{(-?\d+)\}/, 'e$1')
+}
+
 function where(d?: Demand): string {
   if (!d) return ''
   return d.crankDeg === undefined ? ` (${d.loadCase})` : ` (load case ${d.loadCase}, crank ${fmt(d.crankDeg)}°)`
@@ -24,7 +29,7 @@ export function forceStep(id: string, title: string, demands: [string, Demand | 
     title,
     formula: 'F_{d} = \\max_{\\text{load cases}} F_{env} \\cdot \\gamma_{load} \\cdot \\gamma_{dyn}',
     substituted: shown.map(([k, d]) => `${k} = ${fmt(d.raw)} \\cdot ${fmt(factors.load)} \\cdot ${fmt(factors.dynamic)} = ${fmt(d.value)}`).join(',\\; '),
-    value: shown.length ? shown.map(([k, d]) => `${k} ${fmt(d.value)}${where(d)}`).join('; ') : 'none',
+    value: shown.length ? shown.map(([k, d]) => `${k} ${plain(d.value)}${where(d)}`).join('; ') : 'none',
     unit: 'N / N·mm',
     source: 'envelope of the engine over the stroke × user factors',
     verdict: 'info',

@@ -52,14 +52,18 @@ export function envelopeOf(model: LinkageModel, loadCase: string, samples: CaseS
     for (let j = 0; j < joints.length; j++) pin[j].offer(p.pinForces[joints[j]]?.magnitude, p.crankDeg)
     torque.offer(Math.abs(p.driveTorque), p.crankDeg)
   }
+  // An axial force at round-off level of the largest pin force (e.g. 1e-13 N in a crank that only
+  // bends) is solver noise, not a demand: report it as zero so checks do not cite it.
+  const noise = 1e-9 * Math.max(0, ...pin.map((p) => p.value))
+  const real = (v: number) => (Math.abs(v) <= noise ? 0 : v)
   const links: EnvelopeOut['links'] = {}
   model.links.forEach((l, b) => {
     const t = tension[b]
     const c = compression[b]
     links[l.name] = {
       length: linkLength(l),
-      maxTension: { value: Math.max(t.value, 0), crankDeg: t.crankDeg },
-      maxCompression: { value: Math.min(-c.value, 0), crankDeg: c.crankDeg },
+      maxTension: { value: real(Math.max(t.value, 0)), crankDeg: t.crankDeg },
+      maxCompression: { value: real(Math.min(-c.value, 0)), crankDeg: c.crankDeg },
       ...(moment[b].found ? { maxMoment: moment[b].extreme } : {}),
     }
   })
