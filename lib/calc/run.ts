@@ -44,11 +44,11 @@ function strokeRequirement(result: MechanismResult, required: number): Step {
   return {
     id: 'kin.required-stroke',
     section: 'kinematics',
-    title: 'Stroke the machine needs, within the usable stroke',
+    title: 'Usable stroke covers the stroke the machine needs',
     formula: 's_{req} \\le 2 h_u',
     substituted: `${texNumber(required)} \\le 2 \\cdot ${texNumber(result.stroke.usable.half)} = ${texNumber(usable)}`,
-    value: required / usable,
-    unit: '—',
+    value: usable,
+    unit: 'mm',
     source: 'design requirement (inputs)',
     verdict: ok ? 'pass' : 'fail',
     note: ok ? undefined : 'The cell cannot give the required stroke short of its toggle positions: lengthen the arms or change the crank.',
@@ -57,7 +57,7 @@ function strokeRequirement(result: MechanismResult, required: number): Step {
 
 function verdictOf(result: MechanismResult, checks: CheckItem[], strokeStep: Step | null): CalcVerdict {
   if (!result.feasibility.ok) return { pass: false, maxUtilisation: 0, governing: result.feasibility.message }
-  if (strokeStep?.verdict === 'fail') return { pass: false, maxUtilisation: Number(strokeStep.value), governing: strokeStep.title }
+  if (strokeStep?.verdict === 'fail') return { pass: false, maxUtilisation: 0, governing: `${strokeStep.title}: no (${strokeStep.substituted})` }
   const worst = checks.reduce<CheckItem | null>((w, c) => (!w || c.utilisation > w.utilisation ? c : w), null)
   if (!worst) return { pass: true, maxUtilisation: 0, governing: 'no component checks requested' }
   return {
