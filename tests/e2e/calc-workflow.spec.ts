@@ -22,8 +22,8 @@ test('the engineer sees a bad input at its field, then saves, runs and sends a r
 
   await page.getByTestId('inputs-form').getByLabel(/Crank r/).fill('80')
   await page.getByTestId('inputs-form').getByRole('button', { name: 'Save and run' }).click()
-  await expect(page.getByTestId('inputs-form').getByRole('alert')).toContainText('Saved')
-  await expect(page.locator('.inverso-report')).toContainText('Inversion constant')
+  await expect(page.getByTestId('inputs-form').getByRole('alert')).toContainText('Saved', { timeout: 30_000 })
+  await expect(page.locator('.inverso-report')).toContainText('Inversion constant', { timeout: 30_000 })
   await page.screenshot({ path: 'test-results/calc-engineer.png', fullPage: true })
 
   await page.getByRole('button', { name: 'Save revision for check' }).click()

@@ -79,7 +79,6 @@ export default async function CalcPage({ params, searchParams }: Props) {
             />
           )}
           <InputsForm
-            key={calc.updatedAt.getTime()}
             projectId={projectId}
             calcId={calcId}
             calcType={calc.calcType}
