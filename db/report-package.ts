@@ -2,7 +2,7 @@ import { asc, eq, inArray } from 'drizzle-orm'
 import { inputRowsOf } from '@/lib/calc/input-rows'
 import { parseCalcInput, runCalc, type CalcResult } from '@/lib/calc/run'
 import { ENGINE_VERSION } from '@/lib/calc/version'
-import { STATE_LABELS, type RevisionState } from '@/lib/review/roles'
+import { STATE_LABELS } from '@/lib/review/roles'
 import type { Paper, ReportPackage } from '@/reports/types'
 import { db } from './index'
 import { calcs, checkRemarks, projects, revisions, users, type Calc, type Project, type Revision } from './schema'
@@ -37,9 +37,11 @@ function common(project: Project, calc: Calc, paper: Paper) {
 }
 
 /** Everything the report pipeline needs for one saved revision, read from the database. */
-export async function loadReportPackage(revisionId: string, paper: Paper = 'A4', asState?: RevisionState): Promise<ReportPackage> {
-  const [rev] = await db.select().from(revisions).where(eq(revisions.id, revisionId))
-  if (!rev) throw new Error(`revision ${revisionId} not found`)
+export async function loadReportPackage(revisionId: string, paper: Paper = 'A4', pending?: Partial<Revision>): Promise<ReportPackage> {
+  const [stored] = await db.select().from(revisions).where(eq(revisions.id, revisionId))
+  if (!stored) throw new Error(`revision ${revisionId} not found`)
+  // `pending`: a state change and signature about to be written, rendered before it is committed.
+  const rev = { ...stored, ...pending }
   const [calc] = await db.select().from(calcs).where(eq(calcs.id, rev.calcId))
   const [project] = await db.select().from(projects).where(eq(projects.id, calc.projectId))
   const all = await db.select().from(revisions).where(eq(revisions.calcId, calc.id)).orderBy(asc(revisions.createdAt))
@@ -51,7 +53,7 @@ export async function loadReportPackage(revisionId: string, paper: Paper = 'A4',
     ...common(project, calc, paper),
     revision: {
       label: rev.label,
-      state: asState ?? rev.state,
+      state: rev.state,
       engineer: { name: name(rev.engineerId), date: day(rev.createdAt) },
       checker: { name: name(rev.checkerId), date: day(rev.checkedAt) },
       approver: { name: name(rev.approverId), date: day(rev.approvedAt) },

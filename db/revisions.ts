@@ -11,7 +11,7 @@ import { attachmentBytes, attachPendingTo } from './attachments'
 import { audit } from './audit'
 import { db } from './index'
 import { loadReportPackage, TEMPLATE_VERSION } from './report-package'
-import { calcs, revisions, type Calc } from './schema'
+import { calcs, revisions, type Calc, type Revision } from './schema'
 
 /** The report pipeline, passed in: the app loads it outside the Next bundle, tests import it directly. */
 export interface ReportRenderer {
@@ -35,8 +35,8 @@ export function nextRevisionLabel(count: number): string {
 }
 
 /** Renders the revision's PDF as it stands now and stores it under its hash. */
-export async function renderAndStorePdf(revisionId: string, deps: RevisionDeps, paper: Paper = 'A4', asState?: RevisionState) {
-  const pkg = await loadReportPackage(revisionId, paper, asState)
+export async function renderAndStorePdf(revisionId: string, deps: RevisionDeps, paper: Paper = 'A4', pending?: Partial<Revision>) {
+  const pkg = await loadReportPackage(revisionId, paper, pending)
   const bytes = await deps.renderer.renderPdf({ ...pkg, attachments: await attachmentBytes(revisionId, deps.store) })
   const pdfHash = sha256Hex(bytes)
   const pdfKey = `pdf/${pdfHash}.pdf`
@@ -107,22 +107,23 @@ export async function advanceRevision(calc: Calc, revisionId: string, step: keyo
   if (rev.state !== t.from) throw new AppError('conflict', `Revision ${rev.label} is ${rev.state}; only a revision that is ${t.from} can be moved to ${t.to}.`)
   const signers = [rev.engineerId, t.who === 'approver' ? rev.checkerId : null]
   if (signers.includes(userId)) throw new AppError('forbidden', 'The same person cannot sign a revision in two roles.')
-  if (step === 'approve' && rev.approverId && rev.approverId !== userId) throw new AppError('forbidden', 'Another approver approved this revision.')
 
   const now = new Date()
   const sign =
     step === 'check' ? { checkerId: userId, checkedAt: now } : step === 'approve' ? { approverId: userId, approvedAt: now } : { issuedAt: now }
-  if (step === 'issue') {
-    // The previous issue is superseded by this one.
-    await db.update(revisions).set({ state: 'superseded' }).where(and(eq(revisions.calcId, calc.id), eq(revisions.state, 'issued')))
-  }
-  await db.update(revisions).set({ ...sign, frozenAt: now.toISOString() }).where(eq(revisions.id, rev.id))
-  // Render as the new state, then set state and PDF in one statement: after that an issued row is frozen.
-  const pdf = await renderAndStorePdf(rev.id, deps, 'A4', t.to)
-  await db.update(revisions).set({ state: t.to, pdfKey: pdf.pdfKey, pdfHash: pdf.pdfHash }).where(eq(revisions.id, rev.id))
-  await db
-    .update(calcs)
-    .set({ state: t.to, updatedAt: now, ...(step === 'check' ? { checkerId: userId } : step === 'approve' ? { approverId: userId } : {}) })
-    .where(eq(calcs.id, calc.id))
+  const change = { ...sign, state: t.to, frozenAt: now.toISOString() }
+  // Render first with the change applied, then write it all at once: a failed render changes nothing,
+  // and once the row says issued the database freezes it.
+  const pdf = await renderAndStorePdf(rev.id, deps, 'A4', change)
+  await db.transaction(async (tx) => {
+    if (step === 'issue') {
+      await tx.update(revisions).set({ state: 'superseded' }).where(and(eq(revisions.calcId, calc.id), eq(revisions.state, 'issued')))
+    }
+    await tx.update(revisions).set({ ...change, pdfKey: pdf.pdfKey, pdfHash: pdf.pdfHash }).where(eq(revisions.id, rev.id))
+    await tx
+      .update(calcs)
+      .set({ state: t.to, updatedAt: now, ...(step === 'check' ? { checkerId: userId } : step === 'approve' ? { approverId: userId } : {}) })
+      .where(eq(calcs.id, calc.id))
+  })
   await audit({ userId, action: `revision.${step}`, projectId: calc.projectId, calcId: calc.id, detail: { revisionId: rev.id } })
 }

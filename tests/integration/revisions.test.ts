@@ -88,6 +88,8 @@ describe('saving and signing a revision', () => {
     expect(rev.checkerId).toBe(people.checker)
     expect(rev.approverId).toBe(people.approver)
     expect((await calcByNumber('LC-001')).state).toBe('issued')
+    // The signed PDF is reproducible from the frozen row.
+    expect(sha256Hex(await renderPdf(await loadReportPackage(revId)))).toBe(rev.pdfHash)
     await refused(db.update(revisions).set({ pdfHash: 'x' }).where(eq(revisions.id, revId)), /issued revision is frozen/)
     await refused(db.update(revisions).set({ state: 'draft' }).where(eq(revisions.id, revId)), /can only be superseded/)
     await refused(db.delete(revisions).where(eq(revisions.id, revId)), /cannot be deleted/)
