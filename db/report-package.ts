@@ -58,7 +58,8 @@ export async function loadReportPackage(revisionId: string, paper: Paper = 'A4',
       checker: { name: name(rev.checkerId), date: day(rev.checkedAt) },
       approver: { name: name(rev.approverId), date: day(rev.approvedAt) },
     },
-    history: historyOf(all),
+    // Issuing this revision supersedes the one issued before, in the same transaction.
+    history: historyOf(all.map((r) => (r.id === rev.id ? rev : rev.state === 'issued' && r.state === 'issued' ? { ...r, state: 'superseded' as const } : r))),
     remarks: remarks.map((r) => ({
       stepId: r.stepId,
       author: name(r.authorId),

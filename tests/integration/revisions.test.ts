@@ -103,6 +103,7 @@ describe('saving and signing a revision', () => {
     await advanceRevision(calc, b, 'issue', people.approver, deps)
     expect((await revision(revId)).state).toBe('superseded')
     expect((await revision(b)).label).toBe('B')
+    expect(sha256Hex(await renderPdf(await loadReportPackage(b)))).toBe((await revision(b)).pdfHash)
   }, 120_000)
 })
 

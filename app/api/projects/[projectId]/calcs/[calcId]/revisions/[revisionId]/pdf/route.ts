@@ -14,8 +14,9 @@ type Params = { params: Promise<{ projectId: string; calcId: string; revisionId:
 const query = z.object({ paper: z.enum(['A4', 'LETTER']).default('A4') })
 
 /**
- * A revision's PDF. A4 is the stored, hashed record (checked against its hash before sending);
- * US Letter is rendered on demand from the same frozen revision.
+ * A revision's PDF. A4 is the stored, hashed record (checked against its hash before sending).
+ * US Letter, and any superseded revision (so it carries the SUPERSEDED watermark), are rendered on
+ * demand from the same frozen revision; the stored record stays as it was signed.
  */
 export async function GET(req: Request, { params }: Params) {
   try {
@@ -28,7 +29,7 @@ export async function GET(req: Request, { params }: Params) {
     if (!project || !calc || !rev) throw new AppError('not_found', 'No such revision.')
     const deps = await rendererDeps()
     let bytes: Uint8Array
-    if (parsed.data.paper === 'A4' && rev.pdfKey) {
+    if (parsed.data.paper === 'A4' && rev.pdfKey && rev.state !== 'superseded') {
       bytes = await deps.store.get(rev.pdfKey)
       if (sha256Hex(bytes) !== rev.pdfHash) throw new Error(`stored PDF of revision ${rev.id} does not match its hash`)
     } else {
