@@ -2,6 +2,7 @@
  * How values read in both renderings. One formatter, so the PDF, the web view
  * and the tests agree on every digit.
  */
+import { STATE_LABELS } from '../../lib/review/roles'
 import type { StepVerdict } from '../../lib/calc/types'
 import type { RevisionState } from '../types'
 
@@ -42,14 +43,8 @@ export const VERDICT_LABEL: Record<StepVerdict, string> = {
   info: 'INFO',
 }
 
-export const STATE_LABEL: Record<RevisionState, string> = {
-  draft: 'Draft',
-  'in-check': 'In check',
-  checked: 'Checked',
-  approved: 'Approved',
-  issued: 'Issued',
-  superseded: 'Superseded',
-}
+/** The same state names as the app's. */
+export const STATE_LABEL: Record<RevisionState, string> = STATE_LABELS
 
 /** Watermark shown across every page, or null for states that may be relied on. */
 export function watermarkFor(state: RevisionState): string | null {
