@@ -80,3 +80,21 @@ export const LINK_FIELDS = (materials: readonly string[]): InputFieldDef[] => [
   { path: 'defaults.link.section.thickness', label: 'Flat bar thickness', unit: 'mm', step: '0.5' },
   { path: 'defaults.link.material', label: 'Link material', options: materialOptions(materials) },
 ]
+
+/** Joint and link names of each cell (docs/engine.md), for per-component overrides of the defaults. */
+export const COMPONENTS: Record<CalcType, { joints: string[]; links: string[] }> = {
+  peaucellier: { joints: ['O', 'C', 'A', 'B', 'P', 'T'], links: ['OA', 'OB', 'AP', 'BP', 'AT', 'BT', 'CP'] },
+  hart: { joints: ['O', 'C', 'A', 'B', 'D', 'E', 'P', 'T'], links: ['AD', 'AE', 'BD', 'BE', 'CP'] },
+}
+
+/** Only the sizes an engineer typically changes per component; anything else stays on the defaults. */
+export const OVERRIDE_FIELDS = (calcType: CalcType): InputFieldDef[] => [
+  ...COMPONENTS[calcType].joints.flatMap((j) => [
+    { path: `joints.${j}.pinDiameter`, label: `${j}: pin d`, unit: 'mm', step: '0.1' },
+    { path: `joints.${j}.holeDiameter`, label: `${j}: hole d₀`, unit: 'mm', step: '0.1' },
+  ]),
+  ...COMPONENTS[calcType].links.flatMap((l) => [
+    { path: `links.${l}.section.width`, label: `${l}: width`, unit: 'mm', step: '0.5' },
+    { path: `links.${l}.section.thickness`, label: `${l}: thickness`, unit: 'mm', step: '0.5' },
+  ]),
+]

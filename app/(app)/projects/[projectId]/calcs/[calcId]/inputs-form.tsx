@@ -9,7 +9,7 @@ import type { CalcType } from '@/lib/schemas/project'
 import { saveInputsAction } from './actions'
 import { convertInputs, unitFor } from './units'
 import type { UnitSystem } from '@/lib/units'
-import { BASIS_FIELDS, BASIS_OPTIONS, FACTOR_FIELDS, GEOMETRY_FIELDS, LINK_FIELDS, PIN_FIELDS, STROKE_FIELDS, type InputFieldDef } from './input-fields'
+import { BASIS_FIELDS, BASIS_OPTIONS, FACTOR_FIELDS, GEOMETRY_FIELDS, LINK_FIELDS, OVERRIDE_FIELDS, PIN_FIELDS, STROKE_FIELDS, type InputFieldDef } from './input-fields'
 
 type Values = FieldValues & { loads: { name: string; fx: number; fy: number }[]; basis: { kind: string }; displayUnits?: UnitSystem }
 
@@ -56,15 +56,38 @@ function Group({ title, children }: { title: string; children: React.ReactNode }
 function clean(value: unknown): unknown {
   if (typeof value === 'number' && Number.isNaN(value)) return undefined
   if (Array.isArray(value)) return value.map(clean)
-  if (value && typeof value === 'object') return Object.fromEntries(Object.entries(value).map(([k, v]) => [k, clean(v)]))
+  if (value && typeof value === 'object') {
+    // Untouched override groups (every field empty) vanish, so the inputs only say what was given.
+    const entries = Object.entries(value)
+      .map(([k, v]) => [k, clean(v)] as const)
+      .filter(([, v]) => v !== undefined)
+    return entries.length ? Object.fromEntries(entries) : undefined
+  }
   return value
+}
+
+type Section = { shape?: string; width?: number; thickness?: number }
+type Described = {
+  defaults?: { joint?: { middle?: { material?: string }; outer?: { material?: string } }; link?: { section?: Section } }
+  links?: Record<string, { section?: Section }>
+}
+
+/** What the editor implies but does not show: one plate material per fork, and per-link sizes are flat bars. */
+function completeDescriptions(values: Described) {
+  const joint = values.defaults?.joint
+  if (joint?.outer && joint.middle) joint.outer.material = joint.middle.material
+  const base = values.defaults?.link?.section
+  for (const link of Object.values(values.links ?? {})) {
+    if (link.section) link.section = { ...(base?.shape === 'flat' ? base : {}), ...link.section, shape: 'flat' }
+  }
 }
 
 export function InputsForm(props: { projectId: string; calcId: string; calcType: CalcType; initial: Values; materials: readonly string[]; editable: boolean }) {
   const { projectId, calcId, calcType, initial, materials, editable } = props
   const router = useRouter()
   const [system, setSystem] = useState<UnitSystem>(initial.displayUnits === 'US' ? 'US' : 'SI')
-  const allDefs = (kind: string) => [GEOMETRY_FIELDS[calcType], STROKE_FIELDS, BASIS_FIELDS[kind] ?? [], FACTOR_FIELDS, PIN_FIELDS(materials), LINK_FIELDS(materials)].flat()
+  const allDefs = (kind: string) =>
+    [GEOMETRY_FIELDS[calcType], STROKE_FIELDS, BASIS_FIELDS[kind] ?? [], FACTOR_FIELDS, PIN_FIELDS(materials), LINK_FIELDS(materials), OVERRIDE_FIELDS(calcType)].flat()
   const form = useForm<Values>({ defaultValues: convertInputs(initial, allDefs(initial.basis.kind), system, 'toDisplay') })
   const loads = useFieldArray({ control: form.control, name: 'loads' })
   const [errors, setErrors] = useState<Record<string, string>>({})
@@ -76,9 +99,7 @@ export function InputsForm(props: { projectId: string; calcId: string; calcType:
     startTransition(async () => {
       // Stored and computed in SI; the person's unit system is kept as a preference.
       const payload: Values = { ...convertInputs(clean(values) as Values, allDefs(values.basis.kind), system, 'toSI'), displayUnits: system }
-      // One plate material for the fork: the outer plates follow the middle one.
-      const joint = (payload.defaults as { joint?: { middle?: { material?: string }; outer?: { material?: string } } } | undefined)?.joint
-      if (joint?.outer && joint.middle) joint.outer.material = joint.middle.material
+      completeDescriptions(payload as Described)
       const result = await saveInputsAction(projectId, calcId, payload)
       setErrors(result.fieldErrors ?? {})
       setState(result)
@@ -166,6 +187,11 @@ export function InputsForm(props: { projectId: string; calcId: string; calcType:
       </Group>
       <Group title="Pins (every joint)">{PIN_FIELDS(materials).map(field)}</Group>
       <Group title="Links (every link)">{LINK_FIELDS(materials).map(field)}</Group>
+      <details className="border-t border-rule pt-3" open={OVERRIDE_FIELDS(calcType).some((d) => errors[d.path])}>
+        <summary className="h2 cursor-pointer">Per joint and link (overrides the above)</summary>
+        <p className="mt-1 text-[11px] text-ink/50">Leave empty to use the values for every joint or link. A flat bar width needs its thickness too.</p>
+        <div className="mt-2 grid grid-cols-2 gap-x-3 gap-y-2">{OVERRIDE_FIELDS(calcType).map(field)}</div>
+      </details>
       {otherErrors.length > 0 && (
         <ul role="alert" className="rounded bg-fail-soft px-3 py-2 text-xs text-fail">
           {otherErrors.map(([path, message]) => (
