@@ -85,7 +85,7 @@ test('a per-joint pin with a hole smaller than the pin is refused at that joint�
   await form.getByLabel('P: pin d').fill('12')
   await form.getByLabel('P: hole d₀').fill('11')
   await form.getByRole('button', { name: 'Save and run' }).click()
-  await expect(form.locator('#in-joints-P-holeDiameter-error')).toContainText('larger than the pin', { timeout: 30_000 })
+  await expect(form.locator('#in-joints-P-holeDiameter-error')).toContainText('smaller than the pin', { timeout: 30_000 })
   await form.getByLabel('P: hole d₀').fill('12.4')
   await form.getByLabel('OA: width').fill('30')
   await form.getByRole('button', { name: 'Save and run' }).click()
