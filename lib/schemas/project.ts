@@ -50,3 +50,6 @@ export const remarkResponseSchema = z.object({
 })
 
 export const remarkCloseSchema = z.object({ calcId: z.string().min(1), remarkId: z.string().min(1) })
+
+export const memberRoleSchema = z.object({ userId: z.string().min(1), role: z.enum(PROJECT_ROLES, { message: 'Choose a role.' }) })
+export const removeMemberSchema = z.object({ userId: z.string().min(1) })

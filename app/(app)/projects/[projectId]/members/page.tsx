@@ -6,6 +6,7 @@ import { listMembers } from '@/db/queries'
 import { can } from '@/lib/review/permissions'
 import { ROLE_LABELS } from '@/lib/review/roles'
 import { InviteForm } from './invite-form'
+import { MemberRowActions } from './member-row-actions'
 
 export const metadata: Metadata = { title: 'Members' }
 
@@ -29,6 +30,7 @@ export default async function MembersPage({ params }: { params: Promise<{ projec
             <th className="px-3 py-2">E-mail</th>
             <th className="px-3 py-2">Role</th>
             <th className="px-3 py-2">Account</th>
+            <th className="px-3 py-2">Change</th>
           </tr>
         </thead>
         <tbody>
@@ -38,6 +40,9 @@ export default async function MembersPage({ params }: { params: Promise<{ projec
               <td className="px-3 py-1.5 font-mono text-xs">{m.email}</td>
               <td className="px-3 py-1.5">{ROLE_LABELS[m.role]}</td>
               <td className="px-3 py-1.5">{m.active ? 'active' : 'invited'}</td>
+              <td className="px-3 py-1.5">
+                <MemberRowActions projectId={projectId} userId={m.userId} role={m.role} name={m.name} />
+              </td>
             </tr>
           ))}
         </tbody>
