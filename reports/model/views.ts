@@ -73,8 +73,9 @@ export function checksTable(checks: CheckItem[], ctx: ReportContext): TableView 
     rows: checks.map((c) => [
       String(ctx.numberOf.get(c.stepId) ?? '—'),
       c.component,
-      c.check,
-      `${c.basis} ${c.clause}`,
+      // The basis is stated once in the design basis; the governing check of each component is named.
+      c.governing ? `${c.check} — governs` : c.check,
+      c.clause,
       formatValue(c.demand, c.unit),
       formatValue(c.capacity, c.unit),
       formatUtilisation(c.utilisation),
