@@ -42,3 +42,13 @@ describe('member management', () => {
     expect((err as AppError).code).toBe('not_found')
   })
 })
+
+describe('projects', () => {
+  it('a second project with the same code is refused at the code field', async () => {
+    const { createProject } = await import('@/db/projects')
+    await createProject({ code: 'FM-LT12', name: 'Lid tucker LT-12', client: 'Feldmark' }, id.admin)
+    const err = await createProject({ code: 'FM-LT12', name: 'Again', client: '' }, id.admin).catch((e: AppError) => e)
+    expect((err as AppError).code).toBe('conflict')
+    expect((err as AppError).fieldErrors?.code).toMatch(/already uses the code/)
+  })
+})
