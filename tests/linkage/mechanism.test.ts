@@ -5,7 +5,7 @@ import { tmpdir } from 'node:os'
 import path from 'node:path'
 import { ZodError } from 'zod'
 import { mechanismInputSchema, runMechanism } from '@/lib/calc/mechanism'
-import { formatZodError } from '@/lib/calc/format-zod-error'
+import { fieldErrorsOf } from '@/lib/schemas/field-errors'
 import example from '@/examples/peaucellier.json'
 import hartExample from '@/examples/hart.json'
 
@@ -13,15 +13,16 @@ describe('mechanism input schema and error line', () => {
   const bad = (x: unknown) => {
     const r = mechanismInputSchema.safeParse(x)
     if (r.success) throw new Error('expected a schema error')
-    return formatZodError(r.error)
+    const [path, message] = Object.entries(fieldErrorsOf(r.error))[0]
+    return `error: ${path}: ${message}`
   }
   const base = { mechanism: 'peaucellier', geometry: { arm: 150, side: 60, crank: 60 }, loads: [{ name: 'a', fx: 0, fy: 1 }] }
   it('names the field in one line', () => {
     expect(bad({ ...base, geometry: { arm: 150, side: -60, crank: 60 } })).toBe('error: geometry.side: must be positive')
     expect(bad({ ...base, geometry: { arm: 150, crank: 60 } })).toBe('error: geometry.side: is required')
-    expect(bad({ ...base, loads: [{ name: 'a', fx: 'x', fy: 1 }] })).toBe('error: loads[0].fx: must be a number')
+    expect(bad({ ...base, loads: [{ name: 'a', fx: 'x', fy: 1 }] })).toBe('error: loads.0.fx: must be a number')
     expect(bad({ ...base, mechanism: 'other' })).toBe('error: mechanism: must be "peaucellier" or "hart"')
-    expect(bad({ ...base, loads: [base.loads[0], base.loads[0]] })).toMatch(/^error: loads\[1\]\.name: repeats/)
+    expect(bad({ ...base, loads: [base.loads[0], base.loads[0]] })).toMatch(/^error: loads\.1\.name: repeats/)
   })
   it('accepts the example files', () => {
     expect(mechanismInputSchema.safeParse(example).success).toBe(true)
