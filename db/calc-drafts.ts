@@ -1,5 +1,5 @@
 import { eq } from 'drizzle-orm'
-import { parseCalcInput, runCalc } from '@/lib/calc/run'
+import { calculate } from '@/lib/calc/run'
 import { audit } from './audit'
 import { withProjectMaterials } from './materials'
 import { db } from './index'
@@ -14,9 +14,7 @@ export type DraftOutcome = { ok: true; feasible: boolean; message: string } | { 
  */
 export async function saveDraftInputs(calc: Calc, raw: unknown, userId: string): Promise<DraftOutcome> {
   const values = await withProjectMaterials(calc.projectId, raw)
-  const parsed = parseCalcInput(values)
-  if (!parsed.ok) return parsed
-  const run = runCalc(parsed.input)
+  const run = calculate(values)
   if (!run.ok) return run
   await db.update(calcs).set({ draftInputs: values, updatedAt: new Date() }).where(eq(calcs.id, calc.id))
   await audit({ userId, action: 'calc.inputs-saved', projectId: calc.projectId, calcId: calc.id })

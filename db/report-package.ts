@@ -1,13 +1,14 @@
 import { asc, eq, inArray } from 'drizzle-orm'
 import { inputRowsOf } from '@/lib/calc/input-rows'
-import { parseCalcInput, runCalc, type CalcResult } from '@/lib/calc/run'
+import { calculate, parseCalcInput, type CalcResult } from '@/lib/calc/run'
 import { ENGINE_VERSION } from '@/lib/calc/version'
 import { STATE_LABELS } from '@/lib/review/roles'
 import type { Paper, ReportPackage } from '@/reports/types'
+import { TEMPLATE_VERSION } from '@/reports/version'
 import { db } from './index'
 import { calcs, checkRemarks, projects, revisions, users, type Calc, type Project, type Revision } from './schema'
 
-export const TEMPLATE_VERSION = '1'
+export { TEMPLATE_VERSION }
 
 const day = (d: Date | null | undefined) => (d ? d.toISOString().slice(0, 10) : undefined)
 
@@ -78,9 +79,7 @@ export async function loadReportPackage(revisionId: string, paper: Paper = 'A4',
 
 /** A package for the working inputs (not yet a revision): shown as a draft preview, never stored. */
 export async function draftReportPackage(project: Project, calc: Calc): Promise<ReportPackage | { fieldErrors: Record<string, string> }> {
-  const parsed = parseCalcInput(calc.draftInputs)
-  if (!parsed.ok) return parsed
-  const run = runCalc(parsed.input)
+  const run = calculate(calc.draftInputs)
   if (!run.ok) return run
   const all = await db.select().from(revisions).where(eq(revisions.calcId, calc.id)).orderBy(asc(revisions.createdAt))
   const name = await namesOf([calc.engineerId])
@@ -89,7 +88,7 @@ export async function draftReportPackage(project: Project, calc: Calc): Promise<
     revision: { label: 'working copy', state: 'draft', engineer: { name: name(calc.engineerId) }, checker: { name: '—' }, approver: { name: '—' } },
     history: historyOf(all),
     remarks: [],
-    inputRows: inputRowsOf(parsed.input),
+    inputRows: inputRowsOf(run.input),
     result: run.result,
     generatedAt: calc.updatedAt.toISOString(),
     engineVersion: ENGINE_VERSION,

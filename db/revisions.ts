@@ -1,11 +1,11 @@
 import { randomUUID } from 'node:crypto'
 import { and, eq, inArray } from 'drizzle-orm'
-import { parseCalcInput, runCalc } from '@/lib/calc/run'
+import { calculate } from '@/lib/calc/run'
 import { ENGINE_VERSION } from '@/lib/calc/version'
 import { AppError } from '@/lib/errors'
 import type { RevisionState } from '@/lib/review/roles'
 import type { FileStore } from '@/lib/storage'
-import { canonicalJson, sha256Hex } from '@/reports/hash'
+import { canonicalJson, sha256Hex } from '@/lib/calc/hash'
 import type { Paper, ReportPackage } from '@/reports/types'
 import { attachmentBytes, attachPendingTo } from './attachments'
 import { audit } from './audit'
@@ -34,10 +34,15 @@ export function nextRevisionLabel(count: number): string {
   return label
 }
 
-/** Renders the revision's PDF as it stands now and stores it under its hash. */
-export async function renderAndStorePdf(revisionId: string, deps: RevisionDeps, paper: Paper = 'A4', pending?: Partial<Revision>) {
+/** Renders the revision's PDF, appendices included, as it stands now (plus a pending change). */
+export async function renderRevisionPdf(revisionId: string, deps: RevisionDeps, paper: Paper = 'A4', pending?: Partial<Revision>) {
   const pkg = await loadReportPackage(revisionId, paper, pending)
-  const bytes = await deps.renderer.renderPdf({ ...pkg, attachments: await attachmentBytes(revisionId, deps.store) })
+  return deps.renderer.renderPdf({ ...pkg, attachments: await attachmentBytes(revisionId, deps.store) })
+}
+
+/** Renders the revision's record PDF and stores it under its hash. */
+async function renderAndStorePdf(revisionId: string, deps: RevisionDeps, pending?: Partial<Revision>) {
+  const bytes = await renderRevisionPdf(revisionId, deps, 'A4', pending)
   const pdfHash = sha256Hex(bytes)
   const pdfKey = `pdf/${pdfHash}.pdf`
   await deps.store.put(pdfKey, bytes)
@@ -49,10 +54,8 @@ export async function renderAndStorePdf(revisionId: string, deps: RevisionDeps, 
  * engine and template versions, the content hash and the rendered PDF. The revision goes to check.
  */
 export async function saveRevision(calc: Calc, userId: string, deps: RevisionDeps) {
-  const parsed = parseCalcInput(calc.draftInputs)
-  if (!parsed.ok) throw new AppError('invalid', 'The inputs have errors; fix them before saving a revision.', parsed.fieldErrors)
-  const run = runCalc(parsed.input)
-  if (!run.ok) throw new AppError('invalid', 'The pin or link descriptions have errors.', run.fieldErrors)
+  const run = calculate(calc.draftInputs)
+  if (!run.ok) throw new AppError('invalid', 'The inputs have errors; fix them before saving a revision.', run.fieldErrors)
   if (!run.result.feasibility.ok) {
     throw new AppError('invalid', `The mechanism is not feasible: ${run.result.feasibility.message}`)
   }
@@ -114,7 +117,7 @@ export async function advanceRevision(calc: Calc, revisionId: string, step: keyo
   const change = { ...sign, state: t.to, frozenAt: now.toISOString() }
   // Render first with the change applied, then write it all at once: a failed render changes nothing,
   // and once the row says issued the database freezes it.
-  const pdf = await renderAndStorePdf(rev.id, deps, 'A4', change)
+  const pdf = await renderAndStorePdf(rev.id, deps, change)
   await db.transaction(async (tx) => {
     if (step === 'issue') {
       await tx.update(revisions).set({ state: 'superseded' }).where(and(eq(revisions.calcId, calc.id), eq(revisions.state, 'issued')))

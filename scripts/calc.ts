@@ -6,7 +6,7 @@
  */
 import { readFileSync } from 'node:fs'
 import { checksInUnits, runChecksCli } from '@/lib/checks'
-import { parseCalcInput, runCalc } from '@/lib/calc/run'
+import { calculate } from '@/lib/calc/run'
 
 function fail(message: string): never {
   process.stderr.write(`${message}\n`)
@@ -33,11 +33,9 @@ if (typeof json === 'object' && json !== null && !('mechanism' in json)) {
   if (!r.ok) fail(firstError(r.issues))
   output = { units: r.units, ...r.result }
 } else {
-  const parsed = parseCalcInput(json)
-  if (!parsed.ok) fail(firstError(parsed.fieldErrors))
-  const run = runCalc(parsed.input)
+  const run = calculate(json)
   if (!run.ok) fail(firstError(run.fieldErrors))
-  const units = parsed.input.checks?.units ?? 'SI'
+  const units = run.input.checks?.units ?? 'SI'
   output = { ...run.result, checks: checksInUnits(run.result.checks, units) }
 }
 process.stdout.write(`${JSON.stringify(output, null, 2)}\n`)

@@ -10,13 +10,8 @@ import { PDFDocument, StandardFonts } from 'pdf-lib'
 import { renderPdf, renderWebDocument, type ReportPackage } from '../reports/index'
 import { peaucellierPackage } from '../tests/reports/fixtures/peaucellier'
 import { hartPackage } from '../tests/reports/fixtures/hart'
-import { TEMPLATE_VERSION } from '../db/report-package'
-import { DEMO_CALCS, demoPackage as demoFixture } from '../tests/reports/fixtures/demo'
+import { DEMO_CALCS, demoPackage } from '../tests/reports/fixtures/demo'
 
-/** A demo calc as it would be issued, built without a database; the app's template version. */
-function demoPackage(c: (typeof DEMO_CALCS)[number], paper: ReportPackage['paper']): ReportPackage {
-  return { ...demoFixture(c, paper), templateVersion: TEMPLATE_VERSION }
-}
 
 async function sampleAttachment(): Promise<Uint8Array> {
   const doc = await PDFDocument.create()

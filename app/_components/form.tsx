@@ -11,27 +11,40 @@ interface FieldProps extends InputHTMLAttributes<HTMLInputElement> {
   hint?: string
 }
 
-/** A labelled input that keeps what was typed and shows its own error beneath it. */
-export function Field({ name, label, state, hint, defaultValue, ...rest }: FieldProps) {
-  const error = state.fieldErrors?.[name]
+/** What every form control shares: its id, label, error state and the message beneath it. */
+function fieldState(name: string, state: ActionState) {
   const id = `f-${name}`
+  const error = state.fieldErrors?.[name]
+  const control = {
+    id,
+    name,
+    className: 'field',
+    'aria-invalid': error ? true : undefined,
+    'aria-describedby': error ? `${id}-error` : undefined,
+  }
+  return { id, error, control, value: state.values?.[name] }
+}
+
+function FieldShell({ id, label, error, hint, children }: { id: string; label: string; error?: string; hint?: string; children: ReactNode }) {
   return (
     <div>
       <label htmlFor={id} className="label">
         {label}
       </label>
-      <input
-        id={id}
-        name={name}
-        className="field"
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-error` : undefined}
-        defaultValue={state.values?.[name] ?? defaultValue}
-        {...rest}
-      />
+      {children}
       {hint && !error && <p className="mt-1 text-xs text-ink/60">{hint}</p>}
       <FieldError id={`${id}-error`} message={error} />
     </div>
+  )
+}
+
+/** A labelled input that keeps what was typed and shows its own error beneath it. */
+export function Field({ name, label, state, hint, defaultValue, ...rest }: FieldProps) {
+  const f = fieldState(name, state)
+  return (
+    <FieldShell id={f.id} label={label} error={f.error} hint={hint}>
+      <input {...f.control} defaultValue={f.value ?? defaultValue} {...rest} />
+    </FieldShell>
   )
 }
 
@@ -43,22 +56,17 @@ interface SelectFieldProps extends SelectHTMLAttributes<HTMLSelectElement> {
 }
 
 export function SelectField({ name, label, state, options, defaultValue, ...rest }: SelectFieldProps) {
-  const error = state.fieldErrors?.[name]
-  const id = `f-${name}`
+  const f = fieldState(name, state)
   return (
-    <div>
-      <label htmlFor={id} className="label">
-        {label}
-      </label>
-      <select id={id} name={name} className="field" aria-invalid={error ? true : undefined} defaultValue={state.values?.[name] ?? defaultValue} {...rest}>
+    <FieldShell id={f.id} label={label} error={f.error}>
+      <select {...f.control} defaultValue={f.value ?? defaultValue} {...rest}>
         {options.map((o) => (
           <option key={o.value} value={o.value}>
             {o.label}
           </option>
         ))}
       </select>
-      <FieldError id={`${id}-error`} message={error} />
-    </div>
+    </FieldShell>
   )
 }
 

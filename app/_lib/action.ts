@@ -39,6 +39,14 @@ export interface ActionContext {
   formData?: FormData
 }
 
+/** Who is calling and whether the permission table lets them do this in the project. */
+async function authorise(projectId: string, permission: Permission) {
+  const user = await requireUser()
+  const actor = await getActor(user, projectId)
+  if (!can(actor, permission)) throw new AppError('forbidden', 'Your role in this project does not allow this.')
+  return { user, actor }
+}
+
 /**
  * Guard for project-scoped actions: authenticates, resolves the role in the project from the
  * form's `projectId`, checks the permission table, validates, then runs `fn`.
@@ -51,10 +59,8 @@ export function projectAction<S extends z.ZodType>(
   return async (_prev: ActionState, fd: FormData): Promise<ActionState> => {
     const values = formValues(fd)
     try {
-      const user = await requireUser()
       const projectId = values.projectId ?? ''
-      const actor = await getActor(user, projectId)
-      if (!can(actor, permission)) return { message: 'Your role in this project does not allow this.', values }
+      const { user, actor } = await authorise(projectId, permission)
       const parsed = schema.safeParse(values)
       if (!parsed.success) return { fieldErrors: fieldErrorsOf(parsed.error), values, message: 'Check the marked fields.' }
       return (await fn(parsed.data, { user, actor, projectId, formData: fd })) ?? { ok: true }
@@ -74,9 +80,7 @@ export function projectDataAction<A extends unknown[]>(
 ) {
   return async (projectId: string, ...args: A): Promise<ActionState> => {
     try {
-      const user = await requireUser()
-      const actor = await getActor(user, projectId)
-      if (!can(actor, permission)) return { message: 'Your role in this project does not allow this.' }
+      const { user, actor } = await authorise(projectId, permission)
       return (await fn({ user, actor, projectId }, ...args)) ?? { ok: true }
     } catch (err) {
       return errorState(err)

@@ -94,3 +94,13 @@ export function runCalc(input: CalcInput): { ok: true; result: CalcResult } | { 
   if (strokeStep) steps.splice(steps.findLastIndex((s) => s.section === 'kinematics') + 1, 0, strokeStep)
   return { ok: true, result: { ...mech, steps, tables, checks, cautions, verdict: verdictOf(mech, checks, strokeStep) } }
 }
+
+export type Calculated = { ok: true; input: CalcInput; result: CalcResult } | { ok: false; fieldErrors: Record<string, string> }
+
+/** Parse and run in one step: what every caller with raw JSON (form, revision, CLI, preview) needs. */
+export function calculate(raw: unknown): Calculated {
+  const parsed = parseCalcInput(raw)
+  if (!parsed.ok) return parsed
+  const run = runCalc(parsed.input)
+  return run.ok ? { ok: true, input: parsed.input, result: run.result } : run
+}

@@ -3,7 +3,7 @@
 import { useRouter } from 'next/navigation'
 import { useState, useTransition } from 'react'
 import { useFieldArray, useForm, type FieldValues, type Path, type UseFormReturn } from 'react-hook-form'
-import { FieldError } from '@/app/_components/form'
+import { FieldError, FormMessage } from '@/app/_components/form'
 import type { ActionState } from '@/app/_lib/action'
 import type { CalcType } from '@/lib/schemas/project'
 import { saveInputsAction } from './actions'
@@ -133,11 +133,7 @@ export function InputsForm(props: { projectId: string; calcId: string; calcType:
           </button>
         )}
       </div>
-      {state.message && (
-        <p role="alert" className={`rounded px-3 py-2 text-sm ${state.ok ? 'bg-accent-soft text-accent' : 'bg-fail-soft text-fail'}`}>
-          {state.message}
-        </p>
-      )}
+      <FormMessage state={state} />
       <Group title="Geometry">{GEOMETRY_FIELDS[calcType].map(field)}</Group>
       <Group title="Stroke">{STROKE_FIELDS.map(field)}</Group>
       <fieldset className="flex flex-col gap-2 border-t border-rule pt-3">

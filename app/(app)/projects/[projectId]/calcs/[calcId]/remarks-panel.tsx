@@ -1,7 +1,7 @@
 'use client'
 
 import { useActionState } from 'react'
-import { Field, FieldError, FormMessage, SubmitButton } from '@/app/_components/form'
+import { Field, FieldError, FormMessage, SelectField, SubmitButton } from '@/app/_components/form'
 import { addRemarkAction, closeRemarkAction, respondRemarkAction } from './actions'
 
 export interface RemarkRow {
@@ -87,18 +87,13 @@ export function RemarksPanel(props: RemarksPanelProps) {
           <input type="hidden" name="projectId" value={projectId} />
           <input type="hidden" name="calcId" value={calcId} />
           <input type="hidden" name="revisionId" value={revisionId} />
-          <label htmlFor="f-stepId" className="label">
-            Step
-          </label>
-          <select id="f-stepId" name="stepId" className="field" defaultValue={state.values?.stepId ?? ''} aria-invalid={state.fieldErrors?.stepId ? true : undefined}>
-            <option value="">Choose a step…</option>
-            {steps.map((s) => (
-              <option key={s.id} value={s.id}>
-                {s.number}. {s.title}
-              </option>
-            ))}
-          </select>
-          <FieldError id="f-stepId-error" message={state.fieldErrors?.stepId} />
+          <SelectField
+            name="stepId"
+            label="Step"
+            state={state}
+            defaultValue=""
+            options={[{ value: '', label: 'Choose a step…' }, ...steps.map((s) => ({ value: s.id, label: `${s.number}. ${s.title}` }))]}
+          />
           <label htmlFor="f-text" className="label">
             Remark
           </label>

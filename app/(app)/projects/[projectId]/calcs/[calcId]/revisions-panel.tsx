@@ -2,6 +2,7 @@
 
 import { useRouter } from 'next/navigation'
 import { useState, useTransition } from 'react'
+import { FormMessage } from '@/app/_components/form'
 import { StateBadge } from '@/app/_components/state-badge'
 import type { ActionState } from '@/app/_lib/action'
 import type { RevisionState } from '@/lib/review/roles'
@@ -54,19 +55,15 @@ export function RevisionsPanel(props: {
           </button>
         )}
       </div>
-      {state.message && (
-        <div role="alert" className={`rounded px-3 py-2 text-sm ${state.ok ? 'bg-accent-soft text-accent' : 'bg-fail-soft text-fail'}`}>
-          {state.message}
-          {state.fieldErrors && (
-            <ul className="mt-1 list-disc pl-4 text-xs">
-              {Object.entries(state.fieldErrors).map(([k, v]) => (
-                <li key={k}>
-                  <span className="font-mono">{k}</span>: {v}
-                </li>
-              ))}
-            </ul>
-          )}
-        </div>
+      <FormMessage state={state} />
+      {state.fieldErrors && (
+        <ul className="list-disc pl-4 text-xs text-fail">
+          {Object.entries(state.fieldErrors).map(([k, v]) => (
+            <li key={k}>
+              <span className="font-mono">{k}</span>: {v}
+            </li>
+          ))}
+        </ul>
       )}
       {revisions.length === 0 && <p className="text-ink/60">No revision yet. Save one when the working copy is ready for check.</p>}
       <ul className="flex flex-col divide-y divide-rule">

@@ -4,10 +4,10 @@ import { handleApiError, requireProjectPermission } from '@/app/_lib/api'
 import { rendererDeps } from '@/app/_lib/renderer'
 import { db } from '@/db'
 import { getCalc, getProject } from '@/db/queries'
-import { renderAndStorePdf } from '@/db/revisions'
+import { renderRevisionPdf } from '@/db/revisions'
 import { revisions } from '@/db/schema'
 import { AppError } from '@/lib/errors'
-import { sha256Hex } from '@/reports/hash'
+import { sha256Hex } from '@/lib/calc/hash'
 
 type Params = { params: Promise<{ projectId: string; calcId: string; revisionId: string }> }
 
@@ -33,7 +33,7 @@ export async function GET(req: Request, { params }: Params) {
       bytes = await deps.store.get(rev.pdfKey)
       if (sha256Hex(bytes) !== rev.pdfHash) throw new Error(`stored PDF of revision ${rev.id} does not match its hash`)
     } else {
-      bytes = (await renderAndStorePdf(rev.id, deps, parsed.data.paper)).bytes
+      bytes = await renderRevisionPdf(rev.id, deps, parsed.data.paper)
     }
     const name = `${project.code}_${calc.number}_rev${rev.label}_${parsed.data.paper}.pdf`.replace(/[^A-Za-z0-9._-]/g, '_')
     return new Response(Buffer.from(bytes), {
