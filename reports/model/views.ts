@@ -145,7 +145,7 @@ export function references(ctx: ReportContext): { template: string[]; cited: str
     cited.push(s)
   }
   for (const s of ctx.pkg.result.steps) push(s.source)
-  for (const c of ctx.pkg.result.checks ?? []) push(`${c.basis} ${c.clause}`)
+  for (const c of ctx.pkg.result.checks ?? []) push(c.clause)
   return { template: ctx.meta.references.map((r) => r.text), cited }
 }
 
