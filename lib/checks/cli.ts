@@ -3,7 +3,7 @@
  * key names one pin or link and its design force directly. Returns data, not
  * text, so the calc script decides how to print; nothing here exits.
  */
-import type { CheckItem } from '@/lib/calc/types'
+import type { CheckItem } from '@/lib/contract'
 import { fromSI, kindOfSILabel, displayUnit, type UnitSystem } from '@/lib/units'
 import { z } from 'zod'
 import { checkComponent, type ChecksResult } from './run'

@@ -4,7 +4,7 @@
  * load and dynamic factors. The governing load case and crank angle travel
  * with the value so each check can say where it governs.
  */
-import type { Extreme, LoadCaseEnvelope } from '@/lib/calc/types'
+import type { Extreme, LoadCaseEnvelope } from '@/lib/contract'
 import type { Demand, JointForces, LinkForces } from './spec'
 import { maxDemand } from './spec'
 import type { Factors } from './schema'

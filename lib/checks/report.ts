@@ -3,7 +3,7 @@
  * Step per check with its working, a design-force step per component and the
  * summary table. The governing flag is set here so every basis gets it alike.
  */
-import type { CheckItem, Step, Table } from '@/lib/calc/types'
+import type { CheckItem, Step, Table } from '@/lib/contract'
 import { fmt, type CheckSpec, type Demand } from './spec'
 
 export interface ComponentResult {

@@ -4,7 +4,7 @@
  * resolve → basis → report path, so a single pin checked alone gives exactly
  * the numbers it would get inside a full calc with the same force.
  */
-import type { CheckItem, LoadCaseEnvelope, Step, Table } from '@/lib/calc/types'
+import type { CheckItem, LoadCaseEnvelope, Step, Table } from '@/lib/contract'
 import { aiscBasis } from './bases/aisc360'
 import { allowableBasis } from './bases/allowable'
 import { en1993Basis } from './bases/en1993'

@@ -1,13 +1,13 @@
 import type { InversorCell } from './cells/cell'
 import { envelopeOf } from './envelope'
-import { assessGeometry, type StrokeRange, type TracerPath } from './geometry'
+import { assessGeometry, type StrokeRange } from './geometry'
 import { straightness } from './kinematic-checks'
 import { linkLength } from './model'
 import type { ReportContext } from './report/context'
 import { geometrySteps } from './report/geometry-steps'
 import { sweepSteps } from './report/sweep-steps'
 import { sweepTables } from './report/tables'
-import type { EnvelopeOut, PositionOut, StepOut, TableOut, ToggleOut } from './results'
+import type { LinkageResult, Step } from '@/lib/contract'
 import { runSweep, type LoadInput } from './sweep'
 import { tex } from './tex'
 import { DEG } from './vec'
@@ -25,22 +25,8 @@ export interface AnalyseInput {
   amplificationLimit: number
 }
 
-export interface AnalyseOutput {
-  inversionConstant: number
-  lineOffset: number
-  feasibility: { ok: boolean; kind: string; message: string }
-  stroke: StrokeRange & { usable: StrokeRange }
-  line: TracerPath | null
-  straightness: number
-  positions: PositionOut[]
-  loadCases: { name: string; positions: PositionOut[] }[]
-  envelope: EnvelopeOut[]
-  links: { name: string; joints: string[]; kind: 'bar' | 'beam' | 'crank'; length: number }[]
-  groundJoints: string[]
-  toggles: ToggleOut[]
-  steps: StepOut[]
-  tables: TableOut[]
-}
+/** The engine's result: the contract's LinkageResult (the calc layer adds the mechanism id and engine version). */
+export type AnalyseOutput = LinkageResult
 
 export const DEFAULT_SWEEP_COUNT = 41
 
@@ -98,7 +84,7 @@ export function analyse(input: AnalyseInput): AnalyseOutput {
   }
 }
 
-function selfWeightSteps(ctx: ReportContext): StepOut[] {
+function selfWeightSteps(ctx: ReportContext): Step[] {
   const s = ctx.selfWeight
   if (!s || !ctx.sweep) return []
   return [

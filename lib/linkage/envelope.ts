@@ -1,5 +1,5 @@
 import { linkLength, type LinkageModel } from './model'
-import type { EnvelopeOut, ExtremeOut } from './results'
+import type { LoadCaseEnvelope, Extreme } from '@/lib/contract'
 import type { CaseSample } from './sweep'
 
 /**
@@ -24,7 +24,7 @@ class Largest {
     }
   }
 
-  get extreme(): ExtremeOut {
+  get extreme(): Extreme {
     return { value: this.value, crankDeg: this.crankDeg }
   }
 }
@@ -33,7 +33,7 @@ class Largest {
  * Largest demands over the sweep. Tension positive throughout: maxTension is
  * ≥ 0 and maxCompression ≤ 0 (0 when the link never sees that sign).
  */
-export function envelopeOf(model: LinkageModel, loadCase: string, samples: CaseSample[]): EnvelopeOut {
+export function envelopeOf(model: LinkageModel, loadCase: string, samples: CaseSample[]): LoadCaseEnvelope {
   const names = model.links.map((l) => l.name)
   const joints = Object.keys(model.attached)
   const tension = names.map(() => new Largest(samples))
@@ -56,7 +56,7 @@ export function envelopeOf(model: LinkageModel, loadCase: string, samples: CaseS
   // bends) is solver noise, not a demand: report it as zero so checks do not cite it.
   const noise = 1e-9 * Math.max(0, ...pin.map((p) => p.value))
   const real = (v: number) => (Math.abs(v) <= noise ? 0 : v)
-  const links: EnvelopeOut['links'] = {}
+  const links: LoadCaseEnvelope['links'] = {}
   model.links.forEach((l, b) => {
     const t = tension[b]
     const c = compression[b]
@@ -67,7 +67,7 @@ export function envelopeOf(model: LinkageModel, loadCase: string, samples: CaseS
       ...(moment[b].found ? { maxMoment: moment[b].extreme } : {}),
     }
   })
-  const pins: EnvelopeOut['pins'] = {}
+  const pins: LoadCaseEnvelope['pins'] = {}
   joints.forEach((j, k) => (pins[j] = pin[k].extreme))
   const at = samples.find((s) => s.position.crankDeg === torque.crankDeg)
   return {

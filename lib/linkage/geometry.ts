@@ -1,17 +1,12 @@
 import type { InversorCell } from './cells/cell'
 import { crankReach, placeAt, type ReachKind } from './crank'
 import { plain } from './tex'
-import { DEG, type Vec } from './vec'
+import { DEG } from './vec'
+import type { StrokeLimits, TracerPath } from '@/lib/contract'
 
-export type TracerPath =
-  | { kind: 'line'; point: Vec; direction: Vec }
-  | { kind: 'arc'; centre: Vec; radius: number }
-
-export interface StrokeRange {
-  half: number
-  crankMinDeg: number
-  crankMaxDeg: number
-}
+export type { TracerPath }
+/** Crank limits and half stroke, as the contract's StrokeLimits. */
+export type StrokeRange = StrokeLimits
 
 export interface GeometryVerdict {
   k: number

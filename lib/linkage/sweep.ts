@@ -2,7 +2,7 @@ import type { InversorCell } from './cells/cell'
 import { linkageOf, placeAt } from './crank'
 import { groundReactions, memberForces, pinForces, type MemberForces } from './members'
 import { buildModel, pointsFromJoints, type LinkageModel } from './model'
-import type { PositionOut, ToggleOut } from './results'
+import type { PositionResult, ToggleFlag } from '@/lib/contract'
 import { equilibriumResidual, solveStatics, staticsWorkspace, type CaseLoads } from './statics'
 import { DEG, dot, dist, sub, type Vec } from './vec'
 import { virtualWorkTorque, VW_STEP } from './virtual-work'
@@ -28,7 +28,7 @@ export interface SweepInput {
 
 /** One position under one load case, with the internals the envelope and checks need. */
 export interface CaseSample {
-  position: PositionOut
+  position: PositionResult
   members: Record<string, MemberForces>
   /** Largest out-of-balance force over the bodies, N. */
   residual: number
@@ -40,7 +40,7 @@ export interface CaseSample {
 export interface SweepOutput {
   model: LinkageModel
   cases: { name: string; samples: CaseSample[] }[]
-  toggles: ToggleOut[]
+  toggles: ToggleFlag[]
 }
 
 /** Unit forces at the tracer: they measure force amplification whatever the user's loads are. */
@@ -67,7 +67,7 @@ export function runSweep(input: SweepInput): SweepOutput {
     weightPerMm: input.weightPerMm,
   }))
   const cases = loads.map((l) => ({ name: l.name, samples: [] as CaseSample[] }))
-  const toggles: ToggleOut[] = []
+  const toggles: ToggleFlag[] = []
   const solved = [...loads, ...PROBES]
   // Reused at every position: nothing solved into them outlives its iteration.
   const statics = staticsWorkspace(model, solved.length)

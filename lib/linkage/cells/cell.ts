@@ -1,5 +1,6 @@
 import type { LinkDef } from '../model'
 import type { Vec } from '../vec'
+import type { MechanismId } from '@/lib/contract'
 
 /** A formula as shown in a step: symbols, then with the values put in. */
 export interface TexPair {
@@ -14,7 +15,8 @@ export interface TexPair {
  * cell goes flat or folds), so the generic crank code only needs the ring.
  */
 export interface InversorCell {
-  mechanism: 'peaucellier' | 'hart'
+  /** Id of the mechanism this cell belongs to (the registry's id, lib/mechanisms). */
+  mechanism: MechanismId
   /** Set when the proportions themselves make the cell impossible. */
   invalid: { kind: string; message: string } | null
   /** Inversion constant k = |OP|·|OT|, mm². */

@@ -1,6 +1,6 @@
 import type { InversorCell } from '../cells/cell'
 import type { GeometryVerdict } from '../geometry'
-import type { EnvelopeOut } from '../results'
+import type { LoadCaseEnvelope } from '@/lib/contract'
 import type { LoadInput, SweepOutput } from '../sweep'
 
 /** Everything the step and table builders read; they compute nothing new but checks. */
@@ -14,7 +14,7 @@ export interface ReportContext {
   loads: LoadInput[]
   selfWeight: { density: number; area: number; g: number; perMm: number } | null
   sweep: SweepOutput | null
-  envelopes: EnvelopeOut[]
+  envelopes: LoadCaseEnvelope[]
   straightness: number
 }
 

@@ -1,13 +1,13 @@
 import { tex } from '../tex'
-import type { StepOut } from '../results'
+import type { Step } from '@/lib/contract'
 import type { ReportContext } from './context'
 
 const INVERSION = 'geometry of inversion (Coxeter, Introduction to Geometry, §6.1)'
 
 /** Geometry and kinematics steps: what the cell is, and where the tracer goes. */
-export function geometrySteps(ctx: ReportContext): StepOut[] {
+export function geometrySteps(ctx: ReportContext): Step[] {
   const { cell, verdict: v, crank: r, offset: e } = ctx
-  const steps: StepOut[] = [
+  const steps: Step[] = [
     { id: 'geo.inversion-constant', section: 'geometry', title: 'Inversion constant', ...cell.tex.k, value: cell.k, unit: 'mm²', source: cell.source },
   ]
   if (cell.invalid) return [...steps, feasibilityStep(ctx)]
@@ -65,7 +65,7 @@ export function geometrySteps(ctx: ReportContext): StepOut[] {
   return [...steps, ...strokeSteps(ctx)]
 }
 
-function feasibilityStep(ctx: ReportContext): StepOut {
+function feasibilityStep(ctx: ReportContext): Step {
   const f = ctx.verdict.feasibility
   return {
     id: 'geo.feasibility',
@@ -79,11 +79,11 @@ function feasibilityStep(ctx: ReportContext): StepOut {
   }
 }
 
-function strokeSteps(ctx: ReportContext): StepOut[] {
+function strokeSteps(ctx: ReportContext): Step[] {
   const { cell, verdict: v, crank: r, offset: e } = ctx
   const full = v.reach === 'full'
   const c = (cell.rhoMin ** 2 - e * e - r * r) / (2 * e * r)
-  const steps: StepOut[] = [
+  const steps: Step[] = [
     {
       id: 'kin.crank-limit',
       section: 'kinematics',

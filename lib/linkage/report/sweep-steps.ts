@@ -1,16 +1,16 @@
 import { inversionError, linkLengthError, pathError } from '../kinematic-checks'
 import { plain, tex } from '../tex'
-import type { StepOut } from '../results'
+import type { Step } from '@/lib/contract'
 import { caseSlugs, type ReportContext } from './context'
 
 const EQUILIBRIUM = 'statics: equilibrium of pin-jointed bodies'
 
 /** Steps that read the solved sweep: straightness, toggles, envelopes and the independent checks. */
-export function sweepSteps(ctx: ReportContext): StepOut[] {
+export function sweepSteps(ctx: ReportContext): Step[] {
   const sweep = ctx.sweep
   if (!sweep || !ctx.verdict.path) return []
   const first = sweep.cases[0]?.samples ?? []
-  const steps: StepOut[] = [
+  const steps: Step[] = [
     {
       id: 'kin.straightness',
       section: 'kinematics',
@@ -69,13 +69,13 @@ export function sweepSteps(ctx: ReportContext): StepOut[] {
   return steps
 }
 
-function caseSteps(ctx: ReportContext, i: number, slug: string): StepOut[] {
+function caseSteps(ctx: ReportContext, i: number, slug: string): Step[] {
   const sweep = ctx.sweep!
   const c = sweep.cases[i]
   const load = ctx.loads[i]
   const env = ctx.envelopes[i]
   const f = Math.hypot(load.fx, load.fy)
-  const steps: StepOut[] = [
+  const steps: Step[] = [
     {
       id: `stat.load.${slug}`,
       section: 'statics',

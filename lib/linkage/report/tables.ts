@@ -1,8 +1,8 @@
-import type { TableOut } from '../results'
+import type { Table } from '@/lib/contract'
 import { caseSlugs, type ReportContext } from './context'
 
 /** One sweep table per load case: crank angle, tracer, torque, every link's axial force. */
-export function sweepTables(ctx: ReportContext): TableOut[] {
+export function sweepTables(ctx: ReportContext): Table[] {
   const sweep = ctx.sweep
   if (!sweep) return []
   const slugs = caseSlugs(sweep.cases.map((c) => c.name))
