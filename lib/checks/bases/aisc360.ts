@@ -147,7 +147,7 @@ function linkChecks(l: ResolvedLink, f: LinkForces, method: Method): CheckSpec[]
       title: 'Axial force and bending in the link body',
       clause: `AISC 360-16 §H1.1 (Eq. ${ratio >= 0.2 ? 'H1-1a' : 'H1-1b'}) with §F11.1 M_n = F_y Z ≤ 1.6 F_y S_x; lateral-torsional buckling not evaluated`,
       formula: '\\frac{P_r}{P_c} + \\frac{8}{9}\\frac{M_r}{M_c} \\le 1 \\;\\text{or}\\; \\frac{P_r}{2P_c} + \\frac{M_r}{M_c} \\le 1',
-      substituted: `\\frac{P_r}{P_c} = \\frac{${fmt(N)}}{${fmt(Pcap)}} = ${fmt(ratio)},\\; M_c = ${fmt(Mc.value)},\\; \\text{sum} = ${fmt(inter)}`,
+      substituted: `\\frac{P_r}{P_c} = \\frac{${fmt(N)}}{${fmt(Pcap)}} = ${fmt(ratio)},\\; M_r = ${fmt(M)},\\; M_c = ${fmt(Mc.value)},\\; \\text{sum} = ${fmt(inter)}`,
       demand: inter,
       capacity: 1,
       unit: '—',
@@ -170,7 +170,9 @@ export function aiscBasis(method: Method): BasisImpl {
       const sh = design(method, n * 0.563 * j.pin.fu * A, 0.75, 2.0)
       const br = worstPlate(j, F, (p, Fp) => {
         const fy = bearingFy(j, p)
-        return { result: fy, demand: Fp, capacity: design(method, 1.8 * fy * j.d * p.thickness, 0.75, 2.0).value }
+        const Rn = 1.8 * fy * j.d * p.thickness
+        const Rd = design(method, Rn, 0.75, 2.0)
+        return { result: { fy, Rn, tex: Rd.tex }, demand: Fp, capacity: Rd.value }
       })
       const m = pinMoment(j)
       const M = F * m.lever
@@ -194,7 +196,7 @@ export function aiscBasis(method: Method): BasisImpl {
           title: 'Bearing of the pin on the plates',
           clause: `AISC 360-16 §J7(a), Eq. J7-1, ${fac(method, 0.75, 2.0)} (F_y the lower of pin and plate)`,
           formula: 'R_n = 1.8 F_y A_{pb},\\; A_{pb} = d\\, t',
-          substituted: `R_n = 1.8 \\cdot ${fmt(br.result)} \\cdot ${fmt(j.d)} \\cdot ${fmt(br.plate.thickness)} \\Rightarrow ${fmt(br.capacity)} \\ge ${fmt(br.force)}`,
+          substituted: `R_n = 1.8 \\cdot ${fmt(br.result.fy)} \\cdot ${fmt(j.d)} \\cdot ${fmt(br.plate.thickness)} = ${fmt(br.result.Rn)},\\; ${br.result.tex} = ${fmt(br.capacity)} \\ge ${fmt(br.force)}`,
           demand: br.demand,
           capacity: br.capacity,
           unit: 'N',
