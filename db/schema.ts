@@ -1,6 +1,5 @@
 import { sql } from 'drizzle-orm'
 import { index, integer, primaryKey, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core'
-import type { MaterialInput } from '@/lib/checks/schema'
 import type { ProjectRole, RevisionState } from '@/lib/review/roles'
 
 const id = () => text('id').primaryKey()
@@ -83,10 +82,13 @@ export const calcs = sqliteTable(
       .references(() => projects.id, { onDelete: 'cascade' }),
     number: text('number').notNull(),
     title: text('title').notNull(),
-    calcType: text('calc_type', { enum: ['peaucellier', 'hart'] }).notNull(),
+    /** A mechanism id of the registry (lib/mechanisms). */
+    calcType: text('calc_type').notNull(),
     state: text('state').$type<RevisionState>().notNull().default('draft'),
     /** Working inputs of the open draft, saved as the engineer edits. */
     draftInputs: text('draft_inputs', { mode: 'json' }),
+    /** The result of running the working inputs, stored with them so a view never recomputes. */
+    draftResult: text('draft_result', { mode: 'json' }),
     engineerId: text('engineer_id').references(() => users.id),
     checkerId: text('checker_id').references(() => users.id),
     approverId: text('approver_id').references(() => users.id),
@@ -167,7 +169,7 @@ export const projectMaterials = sqliteTable(
       .notNull()
       .references(() => projects.id, { onDelete: 'cascade' }),
     name: text('name').notNull(),
-    data: text('data', { mode: 'json' }).$type<MaterialInput>().notNull(),
+    data: text('data', { mode: 'json' }).$type<Record<string, unknown>>().notNull(),
     source: text('source').notNull(),
     createdBy: text('created_by').references(() => users.id),
     createdAt: createdAt(),
@@ -189,8 +191,28 @@ export const auditEvents = sqliteTable(
   (t) => [index('audit_events_project').on(t.projectId, t.at)],
 )
 
+/** Personal API tokens: shown once, stored as a SHA-256 hash; a token acts as its user, never more. */
+export const apiTokens = sqliteTable(
+  'api_tokens',
+  {
+    id: id(),
+    userId: text('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    name: text('name').notNull(),
+    tokenHash: text('token_hash').notNull().unique(),
+    /** The first characters of the token, so its owner can tell tokens apart. */
+    prefix: text('prefix').notNull(),
+    lastUsedAt: integer('last_used_at', { mode: 'timestamp_ms' }),
+    revokedAt: integer('revoked_at', { mode: 'timestamp_ms' }),
+    createdAt: createdAt(),
+  },
+  (t) => [index('api_tokens_user').on(t.userId)],
+)
+
 export type User = typeof users.$inferSelect
 export type Project = typeof projects.$inferSelect
 export type Calc = typeof calcs.$inferSelect
 export type Revision = typeof revisions.$inferSelect
 export type CheckRemark = typeof checkRemarks.$inferSelect
+export type ApiToken = typeof apiTokens.$inferSelect

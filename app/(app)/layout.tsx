@@ -23,6 +23,9 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
           )}
         </nav>
         <div className="ml-auto flex items-center gap-3 text-sm">
+          <Link href="/settings" className="hover:text-accent">
+            Settings
+          </Link>
           <span data-testid="current-user">
             {user.name}
             {user.isAdmin && <span className="ml-1.5 rounded bg-ink px-1.5 py-0.5 text-[10px] font-semibold text-white uppercase">admin</span>}

@@ -1,10 +1,8 @@
 import 'server-only'
 import type { z } from 'zod'
-import { getActor } from '@/db/queries'
-import type { SessionUser } from '@/lib/auth/lucia'
 import { AppError } from '@/lib/errors'
-import { can, type Actor, type Permission } from '@/lib/review/permissions'
 import { fieldErrorsOf } from '@/lib/schemas/field-errors'
+import type { Caller } from '@/server/access'
 import { requireUser } from './session'
 
 /** The one shape every server action returns; the form shows `fieldErrors` beside each field. */
@@ -28,60 +26,41 @@ export function formValues(fd: FormData): Record<string, string> {
 export function errorState(err: unknown, values?: Record<string, string>): ActionState {
   if (err instanceof AppError) return { message: err.message, fieldErrors: err.fieldErrors, values }
   console.error('[action]', err)
-  return { message: 'Something went wrong on the server; nothing was changed. Try again or tell an administrator.', values }
+  return { message: 'Something went wrong on the server. Reload the page to see what was saved, then try again or tell an administrator.', values }
 }
 
 export interface ActionContext {
-  user: SessionUser
-  actor: Actor
+  caller: Caller
+  /** From the form's hidden `projectId` field; the service checks the caller's role in it. */
   projectId: string
   /** The raw form, for what a schema over strings cannot carry (uploaded files). */
-  formData?: FormData
-}
-
-/** Who is calling and whether the permission table lets them do this in the project. */
-async function authorise(projectId: string, permission: Permission) {
-  const user = await requireUser()
-  const actor = await getActor(user, projectId)
-  if (!can(actor, permission)) throw new AppError('forbidden', 'Your role in this project does not allow this.')
-  return { user, actor }
+  formData: FormData
 }
 
 /**
- * Guard for project-scoped actions: authenticates, resolves the role in the project from the
- * form's `projectId`, checks the permission table, validates, then runs `fn`.
+ * Guard for form actions: authenticates, validates the form with `schema`, then runs `fn`, which
+ * calls a service (the service checks the permission). Errors become the form's messages, and a
+ * refused form keeps what was typed.
  */
-export function projectAction<S extends z.ZodType>(
-  permission: Permission,
-  schema: S,
-  fn: (data: z.infer<S>, ctx: ActionContext) => Promise<ActionState | void>,
-) {
+export function formAction<S extends z.ZodType>(schema: S, fn: (data: z.infer<S>, ctx: ActionContext) => Promise<ActionState | void>) {
   return async (_prev: ActionState, fd: FormData): Promise<ActionState> => {
     const values = formValues(fd)
     try {
-      const projectId = values.projectId ?? ''
-      const { user, actor } = await authorise(projectId, permission)
+      const caller = await requireUser()
       const parsed = schema.safeParse(values)
       if (!parsed.success) return { fieldErrors: fieldErrorsOf(parsed.error), values, message: 'Check the marked fields.' }
-      return (await fn(parsed.data, { user, actor, projectId, formData: fd })) ?? { ok: true }
+      return (await fn(parsed.data, { caller, projectId: values.projectId ?? '', formData: fd })) ?? { ok: true }
     } catch (err) {
       return errorState(err, values)
     }
   }
 }
 
-/**
- * The same guard for actions called with data rather than a form (the calc inputs editor):
- * authenticates, checks the permission in `projectId`, runs `fn`; typed errors become field messages.
- */
-export function projectDataAction<A extends unknown[]>(
-  permission: Permission,
-  fn: (ctx: ActionContext, ...args: A) => Promise<ActionState | void>,
-) {
-  return async (projectId: string, ...args: A): Promise<ActionState> => {
+/** The same guard for actions called with data rather than a form (the calc inputs editor, the revision buttons). */
+export function dataAction<A extends unknown[]>(fn: (caller: Caller, ...args: A) => Promise<ActionState | void>) {
+  return async (...args: A): Promise<ActionState> => {
     try {
-      const { user, actor } = await authorise(projectId, permission)
-      return (await fn({ user, actor, projectId }, ...args)) ?? { ok: true }
+      return (await fn(await requireUser(), ...args)) ?? { ok: true }
     } catch (err) {
       return errorState(err)
     }

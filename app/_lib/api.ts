@@ -1,23 +1,82 @@
 import 'server-only'
-import { getActor, getProject } from '@/db/queries'
+import type { z } from 'zod'
 import { AppError, HTTP_STATUS } from '@/lib/errors'
-import { assertCan, type Actor, type Permission } from '@/lib/review/permissions'
-import { requireUser } from './session'
+import { fieldErrorsOf } from '@/lib/schemas/field-errors'
+import type { Caller } from '@/server/access'
+import { callerForApiToken } from '@/server/auth/api-tokens'
+import { getCurrentUser } from './session'
 
-/** Maps typed errors to HTTP in one place; anything else is logged and becomes a 500. */
-export function handleApiError(err: unknown): Response {
+/** Largest JSON body a route reads (a calc input with many load cases is far smaller). */
+export const MAX_JSON_BYTES = 1024 * 1024
+
+/** The one error shape of the API: `{ error: { code, message, fields? } }`. */
+export function errorResponse(err: unknown): Response {
   if (err instanceof AppError) {
-    return Response.json({ error: err.code, message: err.message, fieldErrors: err.fieldErrors }, { status: HTTP_STATUS[err.code] })
+    const body = { error: { code: err.code, message: err.message, ...(err.fieldErrors ? { fields: err.fieldErrors } : {}) } }
+    return Response.json(body, { status: HTTP_STATUS[err.code], headers: { 'Cache-Control': 'private, no-store' } })
   }
   console.error('[api]', err)
-  return Response.json({ error: 'server_error', message: 'Internal error.' }, { status: 500 })
+  return Response.json({ error: { code: 'server_error', message: 'Internal error; nothing more is known. Tell an administrator.' } }, { status: 500 })
 }
 
-/** Authenticates the caller and checks `permission` in the project; throws AppError otherwise. */
-export async function requireProjectPermission(projectId: string, permission: Permission): Promise<Actor> {
-  const user = await requireUser()
-  if (!(await getProject(projectId))) throw new AppError('not_found', 'No such project.')
-  const actor = await getActor(user, projectId)
-  assertCan(actor, permission)
-  return actor
+/** `Authorization: Bearer <token>` (a personal API token), else the session cookie. */
+export async function callerOf(req: Request): Promise<Caller | null> {
+  const auth = req.headers.get('authorization')
+  if (auth) {
+    const [scheme, token] = auth.split(/\s+/, 2)
+    if (scheme?.toLowerCase() !== 'bearer' || !token) throw new AppError('unauthenticated', 'Use "Authorization: Bearer <token>".')
+    const caller = await callerForApiToken(token)
+    if (!caller) throw new AppError('unauthenticated', 'The token is unknown or has been revoked.')
+    return caller
+  }
+  return getCurrentUser()
+}
+
+/** Reads and validates a JSON body: 415 for another type, 413 when too large, 400 when not JSON, 422 with field paths. */
+export async function readJson<S extends z.ZodType>(req: Request, schema: S): Promise<z.infer<S>> {
+  return parseWith(schema, await readRawJson(req))
+}
+
+export async function readRawJson(req: Request): Promise<unknown> {
+  const type = req.headers.get('content-type') ?? ''
+  if (!/^application\/json\b/i.test(type)) throw new AppError('unsupported_media_type', 'Send the body as application/json.')
+  const length = Number(req.headers.get('content-length') ?? 0)
+  if (length > MAX_JSON_BYTES) throw new AppError('too_large', `The body is larger than ${MAX_JSON_BYTES / 1024} kB.`)
+  const text = await req.text()
+  if (Buffer.byteLength(text) > MAX_JSON_BYTES) throw new AppError('too_large', `The body is larger than ${MAX_JSON_BYTES / 1024} kB.`)
+  try {
+    return JSON.parse(text) as unknown
+  } catch {
+    throw new AppError('bad_request', 'The body is not valid JSON.')
+  }
+}
+
+export function parseWith<S extends z.ZodType>(schema: S, value: unknown): z.infer<S> {
+  const parsed = schema.safeParse(value)
+  if (!parsed.success) throw new AppError('invalid', 'Check the fields named in `fields`.', fieldErrorsOf(parsed.error))
+  return parsed.data
+}
+
+type Handler<P> = (ctx: { req: Request; caller: Caller | null; params: P }) => Promise<Response | object>
+
+/**
+ * Wraps a v1 route handler: resolves the caller, runs the handler (which calls a service), turns a
+ * returned object into JSON (201 when `created` is set by `created()`), and maps every error once.
+ */
+export function apiRoute<P>(handler: Handler<P>) {
+  return async (req: Request, ctx: { params: Promise<P> }): Promise<Response> => {
+    try {
+      const caller = await callerOf(req)
+      const out = await handler({ req, caller, params: await ctx.params })
+      if (out instanceof Response) return out
+      return Response.json(out, { headers: { 'Cache-Control': 'private, no-store' } })
+    } catch (err) {
+      return errorResponse(err)
+    }
+  }
+}
+
+/** A created resource: 201 with its JSON. */
+export function created(body: object): Response {
+  return Response.json(body, { status: 201, headers: { 'Cache-Control': 'private, no-store' } })
 }

@@ -2,7 +2,7 @@ import 'server-only'
 import path from 'node:path'
 import { pathToFileURL } from 'node:url'
 import { localFileStore } from '@/lib/storage'
-import type { RevisionDeps } from '@/db/revisions'
+import type { RevisionDeps } from '@/server/revisions'
 
 type ReportsModule = typeof import('@/reports')
 

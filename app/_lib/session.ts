@@ -2,7 +2,7 @@ import 'server-only'
 import { cookies } from 'next/headers'
 import { redirect } from 'next/navigation'
 import { cache } from 'react'
-import { lucia, type SessionUser } from '@/lib/auth/lucia'
+import { lucia, type SessionUser } from '@/server/auth/lucia'
 import { AppError } from '@/lib/errors'
 
 /** The signed-in user for this request, or null. Refreshes the cookie when lucia extends the session. */

@@ -16,6 +16,7 @@ export const PERMISSIONS = {
   'material.create': ['engineer', 'checker', 'approver'],
   'remark.create': ['checker'],
   'remark.respond': ['engineer'],
+  'remark.close': ['checker'],
   'calc.check': ['checker'],
   'calc.approve': ['approver'],
   'calc.issue': ['approver'],
@@ -42,7 +43,7 @@ export function can(actor: Actor, permission: Permission): boolean {
 
 export class ForbiddenError extends AppError {
   constructor(readonly permission: Permission) {
-    super('forbidden', `Your role does not allow this (${permission}).`)
+    super('forbidden', `Your role in this project does not allow this (${permission}).`)
   }
 }
 

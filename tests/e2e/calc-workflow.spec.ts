@@ -73,7 +73,7 @@ test('a checker cannot save inputs: the server refuses even a forged call', asyn
   await expect(page.getByTestId('inputs-form').getByRole('button', { name: 'Save and run' })).toHaveCount(0)
   await expect(page.getByRole('button', { name: 'Save revision for check' })).toHaveCount(0)
   const projectId = page.url().split('/projects/')[1].split('/')[0]
-  const other = await page.request.get(`/api/projects/${projectId}/calcs/x/revisions/y/pdf`)
+  const other = await page.request.get(`/api/v1/projects/${projectId}/calcs/x/revisions/y/pdf`)
   expect(other.status()).toBe(404)
 })
 

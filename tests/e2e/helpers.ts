@@ -1,5 +1,5 @@
 import { expect, type Page } from '@playwright/test'
-import { DEMO_PASSWORD, DEMO_USERS } from '../../db/seed/demo-data'
+import { DEMO_PASSWORD, DEMO_USERS } from '../../server/demo/demo-data'
 
 export type DemoRole = (typeof DEMO_USERS)[number]['key']
 

@@ -25,7 +25,7 @@ test('a checker who calls the create-calc route directly is refused with 403', a
   await signInAs(page, 'checker')
   await openDemoProject(page)
   const projectId = page.url().split('/projects/')[1]
-  const res = await page.request.post(`/api/projects/${projectId}/calcs`, { data: { number: 'LC-666', title: 'Sneaky', calcType: 'hart' } })
+  const res = await page.request.post(`/api/v1/projects/${projectId}/calcs`, { data: { number: "LC-666", title: "Sneaky", mechanism: "hart" } })
   expect(res.status()).toBe(403)
   await page.reload()
   await expect(page.getByTestId('register')).toBeVisible()

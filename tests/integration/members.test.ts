@@ -2,10 +2,10 @@ import { and, eq } from 'drizzle-orm'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { db } from '@/db'
 import { getActor } from '@/db/queries'
-import { changeMemberRole, removeMember } from '@/db/members'
+import { changeMemberRole, removeMember } from '@/server/members'
 import { projectMembers, projects, users } from '@/db/schema'
-import { DEMO_USERS } from '@/db/seed/demo-data'
-import { seedDemo } from '@/db/seed/seed'
+import { DEMO_USERS } from '@/server/demo/demo-data'
+import { seedDemo } from '@/server/demo/seed'
 import { AppError } from '@/lib/errors'
 import { can } from '@/lib/review/permissions'
 import { useTempEnvironment } from '../helpers/temp-env'
@@ -45,7 +45,7 @@ describe('member management', () => {
 
 describe('projects', () => {
   it('a second project with the same code is refused at the code field', async () => {
-    const { createProject } = await import('@/db/projects')
+    const { createProject } = await import('@/server/projects')
     await createProject({ code: 'FM-LT12', name: 'Lid tucker LT-12', client: 'Feldmark' }, id.admin)
     const err = await createProject({ code: 'FM-LT12', name: 'Again', client: '' }, id.admin).catch((e: AppError) => e)
     expect((err as AppError).code).toBe('conflict')

@@ -2,9 +2,9 @@ import { eq } from 'drizzle-orm'
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest'
 import { db } from '@/db'
 import { calcs, projects, users } from '@/db/schema'
-import { seedDemo } from '@/db/seed/seed'
-import { DEMO_USERS } from '@/db/seed/demo-data'
-import type { SessionUser } from '@/lib/auth/lucia'
+import { seedDemo } from '@/server/demo/seed'
+import { DEMO_USERS } from '@/server/demo/demo-data'
+import type { SessionUser } from '@/server/auth/lucia'
 import { useTempEnvironment } from '../helpers/temp-env'
 
 // The session cookie is the I/O boundary: the route handler asks it who is calling.

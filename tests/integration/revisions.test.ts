@@ -1,12 +1,12 @@
 import { eq } from 'drizzle-orm'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { db } from '@/db'
-import { loadReportPackage } from '@/db/report-package'
-import { advanceRevision, nextRevisionLabel, saveRevision, type RevisionDeps } from '@/db/revisions'
+import { loadReportPackage } from '@/server/report-package'
+import { advanceRevision, nextRevisionLabel, saveRevision, type RevisionDeps } from '@/server/revisions'
 import { calcs, revisions, users } from '@/db/schema'
-import { seedDemo } from '@/db/seed/seed'
-import { DEMO_USERS } from '@/db/seed/demo-data'
-import { saveDraftInputs } from '@/db/calc-drafts'
+import { seedDemo } from '@/server/demo/seed'
+import { DEMO_USERS } from '@/server/demo/demo-data'
+import { saveDraftInputs } from '@/server/calc-drafts'
 import { localFileStore } from '@/lib/storage'
 import { renderPdf } from '@/reports'
 import { canonicalJson, sha256Hex } from '@/reports/hash'
@@ -121,7 +121,7 @@ describe('working inputs', () => {
 
 describe('checker remarks', () => {
   it('anchor to an existing step of a revision in check; unknown steps are refused at the step field', async () => {
-    const { addRemark, closeRemark, listRemarks, respondToRemark } = await import('@/db/remarks')
+    const { addRemark, closeRemark, listRemarks, respondToRemark } = await import('@/server/remarks')
     const calc = await calcByNumber('LC-002')
     const rev = await saveRevision(calc, people.engineer, deps)
     const err = await addRemark(calc, { revisionId: rev, stepId: 'no.such.step', text: 'Why?' }, people.checker).catch((e: { fieldErrors?: Record<string, string> }) => e)

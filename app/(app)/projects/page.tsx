@@ -1,7 +1,7 @@
 import type { Metadata } from 'next'
 import Link from 'next/link'
 import { requirePageUser } from '@/app/_lib/session'
-import { listProjectsForUser } from '@/db/queries'
+import { listProjects } from '@/server/projects'
 import { ROLE_LABELS } from '@/lib/review/roles'
 import { CreateProjectForm } from './create-project-form'
 
@@ -9,7 +9,7 @@ export const metadata: Metadata = { title: 'Projects' }
 
 export default async function ProjectsPage() {
   const user = await requirePageUser()
-  const projects = await listProjectsForUser(user.id, user.isAdmin)
+  const projects = await listProjects(user)
   return (
     <div className="flex flex-col gap-6">
       <h1 className="h1">Projects</h1>

@@ -1,20 +1,19 @@
 'use server'
 
 import { revalidatePath } from 'next/cache'
-import { projectAction } from '@/app/_lib/action'
-import { inviteMember } from '@/lib/auth/invitations'
-import { createCalc } from '@/db/projects'
-import { changeMemberRole, removeMember } from '@/db/members'
+import { formAction } from '@/app/_lib/action'
 import { createCalcSchema, inviteSchema, memberRoleSchema, removeMemberSchema } from '@/lib/schemas/project'
+import { createCalc } from '@/server/calcs'
+import { changeMemberRole, inviteMember, removeMember } from '@/server/members'
 
-export const createCalcAction = projectAction('calc.create', createCalcSchema, async (data, { projectId, user }) => {
-  const id = await createCalc(projectId, data, user.id)
+export const createCalcAction = formAction(createCalcSchema, async (data, { projectId, caller }) => {
+  const calc = await createCalc(caller, projectId, data)
   revalidatePath(`/projects/${projectId}`)
-  return { ok: true, message: `Calc ${data.number} created as a draft.`, redirectTo: `/projects/${projectId}/calcs/${id}` }
+  return { ok: true, message: `Calc ${data.number} created as a draft.`, redirectTo: `/projects/${projectId}/calcs/${calc.id}` }
 })
 
-export const inviteMemberAction = projectAction('member.manage', inviteSchema, async (data, { projectId, user }) => {
-  const result = await inviteMember({ projectId, email: data.email, role: data.role, invitedBy: { id: user.id, name: user.name } })
+export const inviteMemberAction = formAction(inviteSchema, async (data, { projectId, caller }) => {
+  const result = await inviteMember(caller, projectId, data)
   revalidatePath(`/projects/${projectId}/members`)
   return {
     ok: true,
@@ -22,14 +21,14 @@ export const inviteMemberAction = projectAction('member.manage', inviteSchema, a
   }
 })
 
-export const changeRoleAction = projectAction('member.manage', memberRoleSchema, async ({ userId, role }, { projectId, user }) => {
-  await changeMemberRole(projectId, userId, role, user.id)
+export const changeRoleAction = formAction(memberRoleSchema, async ({ userId, role }, { projectId, caller }) => {
+  await changeMemberRole(caller, projectId, userId, role)
   revalidatePath(`/projects/${projectId}/members`)
   return { ok: true, message: 'Role changed.' }
 })
 
-export const removeMemberAction = projectAction('member.manage', removeMemberSchema, async ({ userId }, { projectId, user }) => {
-  await removeMember(projectId, userId, user.id)
+export const removeMemberAction = formAction(removeMemberSchema, async ({ userId }, { projectId, caller }) => {
+  await removeMember(caller, projectId, userId)
   revalidatePath(`/projects/${projectId}/members`)
   return { ok: true, message: 'Member removed.' }
 })

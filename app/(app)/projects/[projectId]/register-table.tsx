@@ -20,7 +20,7 @@ interface Row {
   id: string
   number: string
   title: string
-  calcType: CalcType
+  mechanism: CalcType
   state: RevisionState
   currentRevision: string | null
   engineer: string | null
@@ -31,7 +31,7 @@ interface Row {
 
 async function fetchJson<T>(url: string): Promise<T> {
   const res = await fetch(url)
-  if (!res.ok) throw new Error(((await res.json().catch(() => null)) as { message?: string } | null)?.message ?? `HTTP ${res.status}`)
+  if (!res.ok) throw new Error(((await res.json().catch(() => null)) as { error?: { message?: string } } | null)?.error?.message ?? `HTTP ${res.status}`)
   return res.json() as Promise<T>
 }
 
@@ -39,7 +39,7 @@ const col = createColumnHelper<Row>()
 
 /** The calc register: sortable by any column, filtered by one search box over every text column. */
 export function RegisterTable({ projectId }: { projectId: string }) {
-  const { data, error, isLoading } = useSWR(`/api/projects/${projectId}/calcs`, fetchJson<{ calcs: Row[] }>)
+  const { data, error, isLoading } = useSWR(`/api/v1/projects/${projectId}/calcs`, fetchJson<{ items: Row[] }>)
   const [sorting, setSorting] = useState<SortingState>([{ id: 'number', desc: false }])
   const [filter, setFilter] = useState('')
   const columns = useMemo(
@@ -53,7 +53,7 @@ export function RegisterTable({ projectId }: { projectId: string }) {
         ),
       }),
       col.accessor('title', { header: 'Title' }),
-      col.accessor((r) => CALC_TYPE_LABELS[r.calcType], { id: 'type', header: 'Type' }),
+      col.accessor((r) => CALC_TYPE_LABELS[r.mechanism], { id: 'type', header: 'Type' }),
       col.accessor('currentRevision', { header: 'Rev.', cell: (c) => c.getValue() ?? '—' }),
       col.accessor('state', { header: 'State', cell: (c) => <StateBadge state={c.getValue()} /> }),
       col.accessor('engineer', { header: 'Engineer', cell: (c) => c.getValue() ?? '—' }),
@@ -64,7 +64,7 @@ export function RegisterTable({ projectId }: { projectId: string }) {
     [projectId],
   )
   const table = useReactTable({
-    data: data?.calcs ?? [],
+    data: data?.items ?? [],
     columns,
     state: { sorting, globalFilter: filter },
     onSortingChange: setSorting,
@@ -86,7 +86,7 @@ export function RegisterTable({ projectId }: { projectId: string }) {
           value={filter}
           onChange={(e) => setFilter(e.target.value)}
         />
-        <span className="text-xs text-ink/60">{isLoading ? 'Loading…' : `${table.getRowModel().rows.length} of ${data?.calcs.length ?? 0} calcs`}</span>
+        <span className="text-xs text-ink/60">{isLoading ? 'Loading…' : `${table.getRowModel().rows.length} of ${data?.items.length ?? 0} calcs`}</span>
       </div>
       <table className="w-full text-left text-sm" data-testid="register">
         <thead className="bg-paper text-xs text-ink/70">
@@ -119,7 +119,7 @@ export function RegisterTable({ projectId }: { projectId: string }) {
           {!isLoading && table.getRowModel().rows.length === 0 && (
             <tr>
               <td colSpan={columns.length} className="px-3 py-6 text-center text-ink/60">
-                {data?.calcs.length ? 'No calc matches the filter.' : 'No calcs yet.'}
+                {data?.items.length ? 'No calc matches the filter.' : 'No calcs yet.'}
               </td>
             </tr>
           )}

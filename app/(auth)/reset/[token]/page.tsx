@@ -1,5 +1,5 @@
 import type { Metadata } from 'next'
-import { findToken } from '@/lib/auth/invitations'
+import { findToken } from '@/server/auth/invitations'
 import { AppError } from '@/lib/errors'
 import { TokenProblem } from '../../token-problem'
 import { NewPasswordForm } from './new-password-form'

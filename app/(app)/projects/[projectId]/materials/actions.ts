@@ -2,8 +2,8 @@
 
 import { revalidatePath } from 'next/cache'
 import { z } from 'zod'
-import { projectAction } from '@/app/_lib/action'
-import { addProjectMaterial } from '@/db/materials'
+import { formAction } from '@/app/_lib/action'
+import { addMaterial } from '@/server/materials'
 
 // FormData gives strings: numbers are coerced here, then the checks' own material schema judges them.
 const num = (what: string) => z.coerce.number({ error: `${what} must be a number` })
@@ -17,8 +17,8 @@ const formSchema = z.object({
   source: z.string(),
 })
 
-export const addMaterialAction = projectAction('material.create', formSchema, async ({ name, density, ...data }, { projectId, user }) => {
-  await addProjectMaterial(projectId, name, { ...data, ...(density === '' || density === undefined ? {} : { density }) }, user.id)
+export const addMaterialAction = formAction(formSchema, async ({ name, density, ...data }, { projectId, caller }) => {
+  await addMaterial(caller, projectId, name, { ...data, ...(density === '' || density === undefined ? {} : { density }) })
   revalidatePath(`/projects/${projectId}/materials`)
   return { ok: true, message: `${name} added. Calcs in this project can now use it.` }
 })

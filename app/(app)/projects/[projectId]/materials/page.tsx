@@ -1,7 +1,7 @@
 import type { Metadata } from 'next'
 import Link from 'next/link'
 import { loadProjectContext } from '@/app/_lib/project-context'
-import { listProjectMaterials } from '@/db/materials'
+import { listMaterials } from '@/server/materials'
 import { MATERIALS } from '@/lib/checks'
 import { can } from '@/lib/review/permissions'
 import { MaterialForm } from './material-form'
@@ -10,8 +10,8 @@ export const metadata: Metadata = { title: 'Materials' }
 
 export default async function MaterialsPage({ params }: { params: Promise<{ projectId: string }> }) {
   const { projectId } = await params
-  const { project, actor } = await loadProjectContext(projectId)
-  const own = await listProjectMaterials(projectId)
+  const { user, project, actor } = await loadProjectContext(projectId)
+  const own = await listMaterials(user, projectId)
   const rows = [
     ...Object.values(MATERIALS).map((m) => ({ key: m.id, name: m.id, origin: 'library', fy: m.bands[0].fy, fu: m.bands[0].fu, E: m.E, source: m.sources.strength })),
     ...own.map((m) => ({ key: m.id, name: m.name, origin: 'project', fy: m.data.fy ?? m.data.bands?.[0].fy, fu: m.data.fu ?? m.data.bands?.[0].fu, E: m.data.E, source: m.source })),

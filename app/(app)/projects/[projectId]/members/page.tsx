@@ -2,7 +2,7 @@ import type { Metadata } from 'next'
 import Link from 'next/link'
 import { notFound } from 'next/navigation'
 import { loadProjectContext } from '@/app/_lib/project-context'
-import { listMembers } from '@/db/queries'
+import { listMembers } from '@/server/members'
 import { can } from '@/lib/review/permissions'
 import { ROLE_LABELS } from '@/lib/review/roles'
 import { InviteForm } from './invite-form'
@@ -12,9 +12,9 @@ export const metadata: Metadata = { title: 'Members' }
 
 export default async function MembersPage({ params }: { params: Promise<{ projectId: string }> }) {
   const { projectId } = await params
-  const { project, actor } = await loadProjectContext(projectId)
+  const { user, project, actor } = await loadProjectContext(projectId)
   if (!can(actor, 'member.manage')) notFound()
-  const members = await listMembers(projectId)
+  const members = await listMembers(user, projectId)
   return (
     <div className="flex flex-col gap-5">
       <div>

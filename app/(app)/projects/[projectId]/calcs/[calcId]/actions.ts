@@ -2,73 +2,62 @@
 
 import { revalidatePath } from 'next/cache'
 import { z } from 'zod'
-import { projectAction, projectDataAction } from '@/app/_lib/action'
-import { addAttachment } from '@/db/attachments'
-import { addRemark, closeRemark, respondToRemark } from '@/db/remarks'
+import { dataAction, formAction } from '@/app/_lib/action'
+import { rendererDeps } from '@/app/_lib/renderer'
+import { transitionOf } from '@/lib/review/workflow'
 import { remarkCloseSchema, remarkResponseSchema, remarkSchema } from '@/lib/schemas/project'
 import { localFileStore } from '@/lib/storage'
-import { rendererDeps } from '@/app/_lib/renderer'
-import { getCalc } from '@/db/queries'
-import { saveDraftInputs } from '@/db/calc-drafts'
-import { advanceRevision, saveRevision, TRANSITIONS } from '@/db/revisions'
-import { AppError } from '@/lib/errors'
+import { addAttachment } from '@/server/attachments'
+import { saveInputs } from '@/server/calcs'
+import { addRemark, closeRemark, respondToRemark } from '@/server/remarks'
+import { saveRevision, transitionRevision } from '@/server/revisions'
 
-async function calcOf(projectId: string, calcId: string) {
-  const calc = await getCalc(projectId, calcId)
-  if (!calc) throw new AppError('not_found', 'No such calc in this project.')
-  return calc
-}
+const calcPath = (projectId: string, calcId: string) => `/projects/${projectId}/calcs/${calcId}`
 
 /** Validates and runs the inputs; saves them only when they are valid, so nothing saved is lost. */
-export const saveInputsAction = projectDataAction('calc.edit', async ({ projectId, user }, calcId: string, values: unknown) => {
-  const outcome = await saveDraftInputs(await calcOf(projectId, calcId), values, user.id)
+export const saveInputsAction = dataAction(async (caller, projectId: string, calcId: string, values: unknown) => {
+  const outcome = await saveInputs(caller, projectId, calcId, values)
   if (!outcome.ok) return { fieldErrors: outcome.fieldErrors, message: 'Not saved: check the marked fields. Your last saved inputs are unchanged.' }
-  revalidatePath(`/projects/${projectId}/calcs/${calcId}`)
-  return { ok: true, message: outcome.feasible ? 'Saved and run.' : `Saved. ${outcome.message}` }
+  revalidatePath(calcPath(projectId, calcId))
+  const { feasible, feasibility } = outcome.summary
+  return { ok: true, message: feasible ? 'Saved and run.' : `Saved. ${feasibility}` }
 })
 
-export const saveRevisionAction = projectDataAction('calc.submit', async ({ projectId, user }, calcId: string) => {
-  await saveRevision(await calcOf(projectId, calcId), user.id, await rendererDeps())
-  revalidatePath(`/projects/${projectId}/calcs/${calcId}`)
+export const saveRevisionAction = dataAction(async (caller, projectId: string, calcId: string) => {
+  await saveRevision(caller, projectId, calcId, await rendererDeps())
+  revalidatePath(calcPath(projectId, calcId))
   return { ok: true, message: 'Revision saved and sent to check.' }
 })
 
-const PERMISSION = { check: 'calc.check', approve: 'calc.approve', issue: 'calc.issue' } as const
+/** Any transition of the workflow table, by its action name. */
+export const transitionAction = dataAction(async (caller, projectId: string, calcId: string, revisionId: string, action: string) => {
+  await transitionRevision(caller, projectId, calcId, revisionId, action, await rendererDeps())
+  revalidatePath(calcPath(projectId, calcId))
+  return { ok: true, message: transitionOf(action)?.done }
+})
 
-function transitionAction(step: keyof typeof TRANSITIONS) {
-  return projectDataAction(PERMISSION[step], async ({ projectId, user }, calcId: string, revisionId: string) => {
-    await advanceRevision(await calcOf(projectId, calcId), revisionId, step, user.id, await rendererDeps())
-    revalidatePath(`/projects/${projectId}/calcs/${calcId}`)
-    return { ok: true, message: `Revision ${TRANSITIONS[step].to}.` }
-  })
-}
-
-export const checkRevisionAction = transitionAction('check')
-export const approveRevisionAction = transitionAction('approve')
-export const issueRevisionAction = transitionAction('issue')
-
-export const addAttachmentAction = projectAction('calc.edit', z.object({ calcId: z.string().min(1) }), async ({ calcId }, { projectId, user, formData }) => {
-  const file = formData?.get('file')
+export const addAttachmentAction = formAction(z.object({ calcId: z.string().min(1) }), async ({ calcId }, { projectId, caller, formData }) => {
+  const file = formData.get('file')
   if (!(file instanceof File) || file.size === 0) return { fieldErrors: { file: 'Choose a PDF file.' } }
-  await addAttachment(await calcOf(projectId, calcId), { name: file.name, bytes: new Uint8Array(await file.arrayBuffer()) }, user.id, localFileStore())
-  revalidatePath(`/projects/${projectId}/calcs/${calcId}`)
+  await addAttachment(caller, projectId, calcId, { name: file.name, bytes: new Uint8Array(await file.arrayBuffer()) }, localFileStore())
+  revalidatePath(calcPath(projectId, calcId))
   return { ok: true, message: `${file.name} will be appended to the next revision.` }
 })
 
-export const addRemarkAction = projectAction('remark.create', remarkSchema, async ({ calcId, ...remark }, { projectId, user }) => {
-  await addRemark(await calcOf(projectId, calcId), remark, user.id)
-  revalidatePath(`/projects/${projectId}/calcs/${calcId}`)
+export const addRemarkAction = formAction(remarkSchema, async ({ calcId, ...remark }, { projectId, caller }) => {
+  await addRemark(caller, projectId, calcId, remark)
+  revalidatePath(calcPath(projectId, calcId))
   return { ok: true, message: `Remark on ${remark.stepId} recorded.` }
 })
 
-export const respondRemarkAction = projectAction('remark.respond', remarkResponseSchema, async ({ calcId, remarkId, response }, { projectId, user }) => {
-  await respondToRemark(await calcOf(projectId, calcId), remarkId, response, user.id)
-  revalidatePath(`/projects/${projectId}/calcs/${calcId}`)
+export const respondRemarkAction = formAction(remarkResponseSchema, async ({ calcId, remarkId, response }, { projectId, caller }) => {
+  await respondToRemark(caller, projectId, calcId, remarkId, response)
+  revalidatePath(calcPath(projectId, calcId))
   return { ok: true, message: 'Response recorded.' }
 })
 
-export const closeRemarkAction = projectAction('remark.create', remarkCloseSchema, async ({ calcId, remarkId }, { projectId, user }) => {
-  await closeRemark(await calcOf(projectId, calcId), remarkId, user.id)
-  revalidatePath(`/projects/${projectId}/calcs/${calcId}`)
+export const closeRemarkAction = formAction(remarkCloseSchema, async ({ calcId, remarkId }, { projectId, caller }) => {
+  await closeRemark(caller, projectId, calcId, remarkId)
+  revalidatePath(calcPath(projectId, calcId))
   return { ok: true, message: 'Remark closed.' }
 })

@@ -6,18 +6,16 @@ import '@/reports/web/report.css'
 import { StateBadge } from '@/app/_components/state-badge'
 import { loadProjectContext } from '@/app/_lib/project-context'
 import { reports } from '@/app/_lib/renderer'
-import { getCalc, listRevisions } from '@/db/queries'
-import { draftReportPackage, loadReportPackage } from '@/db/report-package'
 import { defaultCalcInputs } from '@/lib/calc/defaults'
+import type { CalcResult } from '@/lib/calc/run'
 import { MATERIALS } from '@/lib/checks'
+import { AppError } from '@/lib/errors'
 import { can } from '@/lib/review/permissions'
-import { CALC_TYPE_LABELS } from '@/lib/schemas/project'
-import { pendingAttachments } from '@/db/attachments'
-import { listProjectMaterials } from '@/db/materials'
+import { TRANSITIONS } from '@/lib/review/workflow'
+import { CALC_TYPE_LABELS, type CalcType } from '@/lib/schemas/project'
+import { getCalcWorkspace } from '@/server/calc-view'
 import { AttachmentsForm } from './attachments-form'
 import { InputsForm } from './inputs-form'
-import { listRemarks } from '@/db/remarks'
-import type { CalcResult } from '@/lib/calc/run'
 import { RemarksPanel } from './remarks-panel'
 import { RevisionsPanel } from './revisions-panel'
 
@@ -25,23 +23,27 @@ export const metadata: Metadata = { title: 'Calc' }
 
 type Props = { params: Promise<{ projectId: string; calcId: string }>; searchParams: Promise<{ view?: string }> }
 
+async function workspace(...args: Parameters<typeof getCalcWorkspace>) {
+  try {
+    return await getCalcWorkspace(...args)
+  } catch (err) {
+    if (err instanceof AppError && err.code === 'not_found') notFound()
+    throw err
+  }
+}
+
 export default async function CalcPage({ params, searchParams }: Props) {
   const [{ projectId, calcId }, { view }] = await Promise.all([params, searchParams])
-  const { project, actor } = await loadProjectContext(projectId)
-  const calc = await getCalc(projectId, calcId)
-  if (!calc) notFound()
-  const [revisions, pending, ownMaterials] = await Promise.all([listRevisions(calcId), pendingAttachments(calcId), listProjectMaterials(projectId)])
-  const shown = view === 'working' || revisions.length === 0 ? null : (revisions.find((r) => r.id === view) ?? revisions[0])
-  if (view && view !== 'working' && !revisions.some((r) => r.id === view)) notFound()
-
-  const pkg = shown ? await loadReportPackage(shown.id) : await draftReportPackage(project, calc)
-  const html = 'fieldErrors' in pkg ? null : await (await reports()).renderWebHtml(pkg)
+  const { user, project, actor } = await loadProjectContext(projectId)
+  const { calc, revisions, shown, pkg, remarks, pending, materials } = await workspace(user, projectId, calcId, view)
+  const r = await reports()
+  const html = pkg ? await r.renderWebHtml(pkg) : null
   const base = `/projects/${projectId}/calcs/${calcId}`
   // Steps are numbered in the order the package shows them; read that order from the rendered anchors.
   const order = html ? [...html.matchAll(/id="step-([^"]+)"/g)].map((m) => m[1]) : []
   const numberOf = new Map(order.map((id, i) => [id, i + 1]))
   const titles = new Map(((shown?.result as CalcResult | null)?.steps ?? []).map((s) => [s.id, s.title]))
-  const remarks = shown ? await listRemarks(shown.id) : []
+  const calcType = calc.calcType as CalcType
 
   return (
     <div className="flex flex-col gap-4">
@@ -53,7 +55,7 @@ export default async function CalcPage({ params, searchParams }: Props) {
           <span className="font-mono">{calc.number}</span> {calc.title}
         </h1>
         <div className="mt-1 flex items-center gap-2 text-xs text-ink/60">
-          {CALC_TYPE_LABELS[calc.calcType]} <StateBadge state={calc.state} />
+          {CALC_TYPE_LABELS[calcType]} <StateBadge state={calc.state} />
         </div>
       </div>
       <div className="grid items-start gap-4 lg:grid-cols-[24rem_1fr]">
@@ -63,7 +65,7 @@ export default async function CalcPage({ params, searchParams }: Props) {
             calcId={calcId}
             shownId={shown?.id ?? null}
             canSave={can(actor, 'calc.submit')}
-            allowed={{ check: can(actor, 'calc.check'), approve: can(actor, 'calc.approve'), issue: can(actor, 'calc.issue') }}
+            allowed={TRANSITIONS.filter((t) => can(actor, t.permission)).map((t) => t.action)}
             revisions={revisions.map((r) => ({ id: r.id, label: r.label, state: r.state, contentHash: r.contentHash, pdfHash: r.pdfHash, createdAt: r.createdAt.toISOString() }))}
           />
           {shown && (
@@ -73,7 +75,7 @@ export default async function CalcPage({ params, searchParams }: Props) {
               revisionId={shown.id}
               revisionLabel={shown.label}
               steps={order.map((id, i) => ({ id, number: i + 1, title: titles.get(id) ?? id }))}
-              remarks={remarks.map((r) => ({ ...r, stepNumber: numberOf.get(r.stepId) ?? null }))}
+              remarks={remarks.map((rm) => ({ ...rm, stepNumber: numberOf.get(rm.stepId) ?? null }))}
               canRemark={can(actor, 'remark.create') && shown.state === 'in-check'}
               canRespond={can(actor, 'remark.respond')}
             />
@@ -81,9 +83,9 @@ export default async function CalcPage({ params, searchParams }: Props) {
           <InputsForm
             projectId={projectId}
             calcId={calcId}
-            calcType={calc.calcType}
-            initial={(calc.draftInputs ?? defaultCalcInputs(calc.calcType)) as Parameters<typeof InputsForm>[0]['initial']}
-            materials={[...Object.keys(MATERIALS), ...ownMaterials.map((m) => m.name)]}
+            calcType={calcType}
+            initial={(calc.draftInputs ?? defaultCalcInputs(calcType)) as Parameters<typeof InputsForm>[0]['initial']}
+            materials={[...Object.keys(MATERIALS), ...materials.map((m) => m.name)]}
             editable={can(actor, 'calc.edit')}
           />
           {can(actor, 'calc.edit') && <AttachmentsForm projectId={projectId} calcId={calcId} pending={pending.map((a) => ({ id: a.id, name: a.name, size: a.size }))} />}
@@ -93,9 +95,9 @@ export default async function CalcPage({ params, searchParams }: Props) {
             <Link href={`${base}?view=working`} className={`rounded px-2 py-1 ${shown ? 'hover:bg-paper' : 'bg-accent text-white'}`}>
               Working copy
             </Link>
-            {revisions.map((r) => (
-              <Link key={r.id} href={`${base}?view=${r.id}`} className={`rounded px-2 py-1 ${shown?.id === r.id ? 'bg-accent text-white' : 'hover:bg-paper'}`}>
-                Rev {r.label}
+            {revisions.map((rev) => (
+              <Link key={rev.id} href={`${base}?view=${rev.id}`} className={`rounded px-2 py-1 ${shown?.id === rev.id ? 'bg-accent text-white' : 'hover:bg-paper'}`}>
+                Rev {rev.label}
               </Link>
             ))}
           </nav>

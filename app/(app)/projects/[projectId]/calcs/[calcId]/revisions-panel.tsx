@@ -5,8 +5,8 @@ import { useState, useTransition } from 'react'
 import { FormMessage } from '@/app/_components/form'
 import { StateBadge } from '@/app/_components/state-badge'
 import type { ActionState } from '@/app/_lib/action'
-import type { RevisionState } from '@/lib/review/roles'
-import { approveRevisionAction, checkRevisionAction, issueRevisionAction, saveRevisionAction } from './actions'
+import { transitionsFrom, type RevisionState, type TransitionAction } from '@/lib/review/workflow'
+import { saveRevisionAction, transitionAction } from './actions'
 
 interface RevisionRow {
   id: string
@@ -17,20 +17,13 @@ interface RevisionRow {
   createdAt: string
 }
 
-type Step = 'check' | 'approve' | 'issue'
-const NEXT_STEP: Partial<Record<RevisionState, { step: Step; label: string }>> = {
-  'in-check': { step: 'check', label: 'Mark as checked' },
-  checked: { step: 'approve', label: 'Approve' },
-  approved: { step: 'issue', label: 'Issue' },
-}
-const ACTIONS = { check: checkRevisionAction, approve: approveRevisionAction, issue: issueRevisionAction }
-
 export function RevisionsPanel(props: {
   projectId: string
   calcId: string
   shownId: string | null
   canSave: boolean
-  allowed: Record<Step, boolean>
+  /** The workflow actions the viewer's role may take. */
+  allowed: TransitionAction[]
   revisions: RevisionRow[]
 }) {
   const { projectId, calcId, revisions, allowed } = props
@@ -43,7 +36,7 @@ export function RevisionsPanel(props: {
       setState(result)
       if (result.ok) router.refresh()
     })
-  const pdf = (id: string, paper: string) => `/api/projects/${projectId}/calcs/${calcId}/revisions/${id}/pdf?paper=${paper}`
+  const pdf = (id: string, paper: string) => `/api/v1/projects/${projectId}/calcs/${calcId}/revisions/${id}/pdf?paper=${paper}`
 
   return (
     <section className="panel flex flex-col gap-3 p-4" data-testid="revisions">
@@ -68,7 +61,7 @@ export function RevisionsPanel(props: {
       {revisions.length === 0 && <p className="text-ink/60">No revision yet. Save one when the working copy is ready for check.</p>}
       <ul className="flex flex-col divide-y divide-rule">
         {revisions.map((r) => {
-          const next = NEXT_STEP[r.state]
+          const next = transitionsFrom(r.state).filter((t) => allowed.includes(t.action))
           return (
             <li key={r.id} className="flex flex-col gap-1 py-2">
               <div className="flex items-center gap-2">
@@ -86,16 +79,17 @@ export function RevisionsPanel(props: {
                 <a className="text-xs text-accent underline" href={pdf(r.id, 'LETTER')}>
                   PDF (US Letter)
                 </a>
-                {next && allowed[next.step] && (
+                {next.map((t) => (
                   <button
+                    key={t.action}
                     type="button"
                     className="btn-quiet ml-auto"
                     disabled={pending}
-                    onClick={() => run(() => ACTIONS[next.step](projectId, calcId, r.id))}
+                    onClick={() => window.confirm(t.confirm) && run(() => transitionAction(projectId, calcId, r.id, t.action))}
                   >
-                    {next.label}
+                    {t.button}
                   </button>
-                )}
+                ))}
               </div>
             </li>
           )

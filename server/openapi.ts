@@ -1,0 +1,114 @@
+import { OpenAPIRegistry, OpenApiGeneratorV31, type RouteConfig } from '@asteasolutions/zod-to-openapi'
+import { z } from 'zod'
+import {
+  calcOut,
+  createRevisionBody,
+  errorBody,
+  inputsSavedOut,
+  items,
+  memberOut,
+  projectOut,
+  registerRowOut,
+  remarkBody,
+  remarkOut,
+  replyBody,
+  revisionOut,
+  revisionRowOut,
+  transitionBody,
+} from '@/lib/schemas/api'
+import { createCalcSchema } from '@/lib/schemas/project'
+
+const json = (schema: z.ZodType, description: string) => ({ description, content: { 'application/json': { schema } } })
+
+const ERRORS = {
+  400: 'The body is not valid JSON',
+  401: 'No session and no valid bearer token',
+  403: 'Your role in this project does not allow this',
+  404: 'No such project, calc or revision visible to you',
+  409: 'The revision is not in a state that allows this',
+  413: 'The body is too large',
+  415: 'The body is not application/json',
+  422: 'A field is invalid; `fields` names it by dotted path',
+  429: 'Too many requests',
+} as const
+
+type Method = RouteConfig['method']
+interface Op {
+  method: Method
+  path: string
+  summary: string
+  body?: z.ZodType
+  ok: { status: 200 | 201; schema?: z.ZodType; description: string; pdf?: boolean }
+  errors: (keyof typeof ERRORS)[]
+  query?: z.ZodObject
+  open?: boolean
+}
+
+const project = z.object({ projectId: z.string() })
+const calc = project.extend({ calcId: z.string() })
+const revision = calc.extend({ revisionId: z.string() })
+const remark = revision.extend({ remarkId: z.string() })
+const paramsFor = (path: string) => (path.includes('{remarkId}') ? remark : path.includes('{revisionId}') ? revision : path.includes('{calcId}') ? calc : path.includes('{projectId}') ? project : undefined)
+
+const calcInput = z.record(z.string(), z.unknown()).describe('A calc input in the CLI’s format: `mechanism`, `geometry`, `loads`, … and optionally `basis`, `defaults`, `joints`, `links` (docs/engine.md, docs/checks.md)')
+const createCalcBody = createCalcSchema.omit({ calcType: true }).extend({ mechanism: createCalcSchema.shape.calcType })
+
+const base = '/api/v1/projects/{projectId}/calcs/{calcId}/revisions/{revisionId}'
+
+/** Every operation of API v1. A test checks that each route file under app/api/v1 appears here. */
+export const OPERATIONS: Op[] = [
+  { method: 'get', path: '/api/v1/projects', summary: 'Projects you belong to', ok: { status: 200, schema: items(projectOut), description: 'Projects' }, errors: [401] },
+  { method: 'get', path: '/api/v1/projects/{projectId}/members', summary: 'Members of a project', ok: { status: 200, schema: items(memberOut), description: 'Members' }, errors: [401, 404] },
+  { method: 'get', path: '/api/v1/projects/{projectId}/calcs', summary: 'The calc register', ok: { status: 200, schema: items(registerRowOut), description: 'Calcs' }, errors: [401, 404] },
+  { method: 'post', path: '/api/v1/projects/{projectId}/calcs', summary: 'Create a draft calc (defaults saved and run)', body: createCalcBody, ok: { status: 201, schema: calcOut, description: 'The new calc' }, errors: [400, 401, 403, 404, 409, 413, 415, 422] },
+  { method: 'get', path: '/api/v1/projects/{projectId}/calcs/{calcId}', summary: 'A calc, its working inputs, the working result’s summary and its revisions', ok: { status: 200, schema: calcOut, description: 'The calc' }, errors: [401, 404] },
+  { method: 'put', path: '/api/v1/projects/{projectId}/calcs/{calcId}/inputs', summary: 'Replace the working inputs', body: calcInput, ok: { status: 200, schema: inputsSavedOut, description: 'Saved and run' }, errors: [400, 401, 403, 404, 413, 415, 422] },
+  { method: 'get', path: '/api/v1/projects/{projectId}/calcs/{calcId}/revisions', summary: 'Revisions of a calc, newest first', ok: { status: 200, schema: items(revisionRowOut), description: 'Revisions' }, errors: [401, 404] },
+  { method: 'post', path: '/api/v1/projects/{projectId}/calcs/{calcId}/revisions', summary: 'Save the working inputs as a revision for check', body: createRevisionBody, ok: { status: 201, schema: revisionOut, description: 'The new revision' }, errors: [400, 401, 403, 404, 413, 415, 422] },
+  { method: 'get', path: base, summary: 'A revision: inputs, result, state, signatures and hashes', ok: { status: 200, schema: revisionOut, description: 'The revision' }, errors: [401, 404] },
+  { method: 'get', path: `${base}/pdf`, summary: 'The revision’s PDF package', query: z.object({ paper: z.enum(['A4', 'LETTER']).optional() }), ok: { status: 200, description: 'PDF', pdf: true }, errors: [401, 403, 404, 422] },
+  { method: 'post', path: `${base}/transitions`, summary: 'Move the revision along the workflow', body: transitionBody, ok: { status: 200, schema: revisionOut, description: 'The revision after the transition' }, errors: [400, 401, 403, 404, 409, 413, 415, 422] },
+  { method: 'get', path: `${base}/remarks`, summary: 'Remarks on a revision', ok: { status: 200, schema: items(remarkOut), description: 'Remarks' }, errors: [401, 404] },
+  { method: 'post', path: `${base}/remarks`, summary: 'Add a remark on a step', body: remarkBody, ok: { status: 201, schema: remarkOut, description: 'The new remark' }, errors: [400, 401, 403, 404, 409, 413, 415, 422] },
+  { method: 'post', path: `${base}/remarks/{remarkId}/replies`, summary: 'Reply to a remark', body: replyBody, ok: { status: 201, schema: remarkOut, description: 'The remark with the reply' }, errors: [400, 401, 403, 404, 409, 413, 415, 422] },
+  { method: 'post', path: `${base}/remarks/{remarkId}/close`, summary: 'Close a remark', ok: { status: 200, schema: remarkOut, description: 'The closed remark' }, errors: [401, 403, 404] },
+  { method: 'post', path: '/api/v1/analyse', summary: 'Run a calc without storing it: the CLI’s input in, the CLI’s output out', body: calcInput, ok: { status: 200, schema: z.record(z.string(), z.unknown()), description: 'The CLI’s output JSON' }, errors: [400, 401, 413, 415, 422] },
+  { method: 'get', path: '/api/v1/openapi.json', summary: 'This document', ok: { status: 200, schema: z.record(z.string(), z.unknown()), description: 'OpenAPI 3.1' }, errors: [], open: true },
+]
+
+let cached: object | null = null
+
+export function openApiDocument(): object {
+  if (cached) return cached
+  const registry = new OpenAPIRegistry()
+  const bearer = registry.registerComponent('securitySchemes', 'bearerToken', { type: 'http', scheme: 'bearer', description: 'A personal API token (settings page, or `npm run token`)' })
+  const cookie = registry.registerComponent('securitySchemes', 'session', { type: 'apiKey', in: 'cookie', name: 'inverso_session' })
+  const error = registry.register('Error', errorBody)
+  for (const op of OPERATIONS) {
+    const responses: RouteConfig['responses'] = {
+      [op.ok.status]: op.ok.pdf ? { description: op.ok.description, content: { 'application/pdf': { schema: { type: 'string', format: 'binary' } } } } : json(op.ok.schema!, op.ok.description),
+    }
+    for (const code of op.errors) responses[code] = json(error, ERRORS[code])
+    registry.registerPath({
+      method: op.method,
+      path: op.path,
+      summary: op.summary,
+      security: op.open ? [] : [{ [bearer.name]: [] }, { [cookie.name]: [] }],
+      request: {
+        params: paramsFor(op.path),
+        query: op.query,
+        body: op.body ? { required: op.method !== 'post' || op.body !== createRevisionBody, content: { 'application/json': { schema: op.body } } } : undefined,
+      },
+      responses,
+    })
+  }
+  cached = new OpenApiGeneratorV31(registry.definitions).generateDocument({
+    openapi: '3.1.0',
+    info: {
+      title: 'Inverso API',
+      version: '1.0.0',
+      description: 'Calc packages for exact straight-line linkages. Stable for scripting: paths and keys only grow. Errors: `{ error: { code, message, fields? } }`.',
+    },
+  })
+  return cached
+}

@@ -1,0 +1,104 @@
+import { asc, eq, inArray } from 'drizzle-orm'
+import { db } from '@/db'
+import { calcs, checkRemarks, projects, revisions, users, type Calc, type Project, type Revision } from '@/db/schema'
+import { inputRowsOf } from '@/lib/calc/input-rows'
+import { parseCalcInput, type CalcResult } from '@/lib/calc/run'
+import { ENGINE_VERSION } from '@/lib/calc/version'
+import { STATES } from '@/lib/review/workflow'
+import type { CalcType, Paper, ReportPackage } from '@/reports/types'
+import { TEMPLATE_VERSION } from '@/reports/version'
+
+export { TEMPLATE_VERSION }
+
+const day = (d: Date | null | undefined) => (d ? d.toISOString().slice(0, 10) : undefined)
+
+async function namesOf(ids: (string | null)[]) {
+  const wanted = ids.filter((x): x is string => !!x)
+  const rows = wanted.length ? await db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, wanted)) : []
+  const map = new Map(rows.map((u) => [u.id, u.name]))
+  return (id: string | null) => (id ? (map.get(id) ?? '—') : '—')
+}
+
+function historyOf(all: Revision[]) {
+  return all.map((r) => ({
+    label: r.label,
+    state: r.state,
+    date: day(r.issuedAt ?? r.approvedAt ?? r.checkedAt ?? r.createdAt) ?? '',
+    note: STATES[r.state].label,
+  }))
+}
+
+function common(project: Project, calc: Calc, paper: Paper) {
+  return {
+    paper,
+    project: { code: project.code, name: project.name, client: project.client },
+    calc: { number: calc.number, title: calc.title, type: calc.calcType as CalcType },
+    attachments: [],
+  }
+}
+
+/**
+ * Everything the report pipeline needs for one revision. `rev` may be a row not yet written (a
+ * revision about to be saved, or a state change about to be signed), so the PDF is rendered before
+ * anything is committed; `others` are the calc's stored revisions as they will stand after it.
+ */
+export async function reportPackageOf(rev: Revision, others: Revision[], paper: Paper = 'A4'): Promise<ReportPackage> {
+  const [calc] = await db.select().from(calcs).where(eq(calcs.id, rev.calcId))
+  const [project] = await db.select().from(projects).where(eq(projects.id, calc.projectId))
+  const remarks = await db.select().from(checkRemarks).where(eq(checkRemarks.revisionId, rev.id)).orderBy(asc(checkRemarks.createdAt))
+  const name = await namesOf([rev.engineerId, rev.checkerId, rev.approverId, ...remarks.map((r) => r.authorId)])
+  const parsed = parseCalcInput(rev.inputs)
+  if (!parsed.ok) throw new Error(`stored inputs of revision ${rev.label} no longer parse: ${JSON.stringify(parsed.fieldErrors)}`)
+  const all = [...others.filter((r) => r.id !== rev.id), rev].sort((a, b) => a.createdAt.getTime() - b.createdAt.getTime())
+  return {
+    ...common(project, calc, paper),
+    revision: {
+      label: rev.label,
+      state: rev.state,
+      engineer: { name: name(rev.engineerId), date: day(rev.createdAt) },
+      checker: { name: name(rev.checkerId), date: day(rev.checkedAt) },
+      approver: { name: name(rev.approverId), date: day(rev.approvedAt) },
+    },
+    history: historyOf(all),
+    remarks: remarks.map((r) => ({
+      stepId: r.stepId,
+      author: name(r.authorId),
+      role: 'checker',
+      text: r.response ? `${r.text} — Response: ${r.response}` : r.text,
+      status: r.status,
+      date: day(r.createdAt) ?? '',
+    })),
+    inputRows: inputRowsOf(parsed.input),
+    result: rev.result as CalcResult,
+    generatedAt: rev.frozenAt ?? rev.createdAt.toISOString(),
+    engineVersion: rev.engineVersion,
+    templateVersion: rev.templateVersion ?? TEMPLATE_VERSION,
+  }
+}
+
+/** The package of a stored revision, as it stands. */
+export async function loadReportPackage(revisionId: string, paper: Paper = 'A4'): Promise<ReportPackage> {
+  const [rev] = await db.select().from(revisions).where(eq(revisions.id, revisionId))
+  if (!rev) throw new Error(`revision ${revisionId} not found`)
+  const others = await db.select().from(revisions).where(eq(revisions.calcId, rev.calcId))
+  return reportPackageOf(rev, others, paper)
+}
+
+/** A package for the working inputs (not yet a revision), from the result stored with them; never stored. */
+export async function draftReportPackage(project: Project, calc: Calc): Promise<ReportPackage | null> {
+  const parsed = parseCalcInput(calc.draftInputs)
+  if (!parsed.ok || !calc.draftResult) return null
+  const all = await db.select().from(revisions).where(eq(revisions.calcId, calc.id)).orderBy(asc(revisions.createdAt))
+  const name = await namesOf([calc.engineerId])
+  return {
+    ...common(project, calc, 'A4'),
+    revision: { label: 'working copy', state: 'draft', engineer: { name: name(calc.engineerId) }, checker: { name: '—' }, approver: { name: '—' } },
+    history: historyOf(all),
+    remarks: [],
+    inputRows: inputRowsOf(parsed.input),
+    result: calc.draftResult as CalcResult,
+    generatedAt: calc.updatedAt.toISOString(),
+    engineVersion: ENGINE_VERSION,
+    templateVersion: TEMPLATE_VERSION,
+  }
+}
