@@ -1,4 +1,4 @@
-import type { CalcType } from '@/lib/schemas/project'
+import { getMechanism, type MechanismId } from '@/lib/mechanisms'
 
 /** A 10 mm C45 pin in double shear through S355 plates: a common first choice for light cells. */
 export const DEFAULT_PIN = {
@@ -17,14 +17,10 @@ export const DEFAULT_LINK = { section: { shape: 'flat', width: 25, thickness: 8 
  * Starting inputs for a new calc: a feasible cell with one load case and a complete pin and link
  * description, so the first run gives a full package. The engineer changes what differs.
  */
-export function defaultCalcInputs(calcType: CalcType): Record<string, unknown> {
-  const geometry =
-    calcType === 'peaucellier'
-      ? { arm: 250, side: 100, crank: 100, crankPivotOffset: 100 }
-      : { long: 240, short: 100, ratio: 0.3, crank: 40, crankPivotOffset: 40 }
+export function defaultCalcInputs(mechanism: MechanismId): Record<string, unknown> {
   return {
-    mechanism: calcType,
-    geometry,
+    mechanism,
+    geometry: { ...getMechanism(mechanism).defaultGeometry },
     loads: [{ name: 'Working load', fx: 0, fy: -150 }],
     toggleMarginDeg: 5,
     basis: { kind: 'en1993', gammaM0: 1.0, gammaM1: 1.0, gammaM2: 1.25, gammaM6ser: 1.0 },

@@ -1,3 +1,4 @@
+import { getMechanism } from '@/lib/mechanisms'
 import type { CalcInput } from './run'
 
 export interface InputRow {
@@ -5,16 +6,6 @@ export interface InputRow {
   label: string
   value: number | string
   unit: string
-}
-
-const GEOMETRY_LABELS: Record<string, [string, string]> = {
-  arm: ['Arm length l (pole to outer rhombus vertices)', 'mm'],
-  side: ['Rhombus side s', 'mm'],
-  long: ['Long links a', 'mm'],
-  short: ['Short links b', 'mm'],
-  ratio: ['Ratio μ placing pole, driven point and tracer', '—'],
-  crank: ['Crank length r', 'mm'],
-  crankPivotOffset: ['Crank pivot offset e from the pole', 'mm'],
 }
 
 /** Labels and units of the nested keys (pins, links, basis, self-weight, materials), by dotted key. */
@@ -94,12 +85,13 @@ function flatten(group: string, prefix: string, value: unknown, out: InputRow[])
 /** The inputs table of the calc package: every value the engineer entered, grouped. */
 export function inputRowsOf(input: CalcInput): InputRow[] {
   const m = input.mechanism
-  const rows: InputRow[] = [{ group: 'Mechanism', label: 'Type', value: m.mechanism === 'peaucellier' ? 'Peaucellier–Lipkin cell' : "Hart's inversor", unit: '' }]
-  const geometry: Record<string, number | undefined> = { ...m.geometry, crankPivotOffset: m.geometry.crankPivotOffset ?? m.geometry.crank }
-  for (const [key, value] of Object.entries(geometry)) {
-    if (value === undefined) continue
-    const [label, unit] = GEOMETRY_LABELS[key] ?? [key, 'mm']
-    rows.push({ group: 'Geometry', label, value, unit })
+  const def = getMechanism(m.mechanism)
+  const rows: InputRow[] = [{ group: 'Mechanism', label: 'Type', value: def.label, unit: '' }]
+  // The parsed geometry: defaults (e.g. e = r) shown as the values the calc used.
+  const geometry = def.geometry.parse(m.geometry)
+  for (const f of def.fields) {
+    const value = geometry[f.key]
+    if (value !== undefined) rows.push({ group: 'Geometry', label: f.description, value, unit: f.unit })
   }
   rows.push({ group: 'Stroke', label: 'Margin kept from the toggle positions', value: m.toggleMarginDeg ?? 5, unit: '°' })
   for (const l of m.loads) {

@@ -1,17 +1,15 @@
 import { z } from 'zod'
-import { analyse, hartCell, peaucellierCell, type InversorCell } from '@/lib/linkage'
-import type { MechanismResult } from './types'
+import { analyse } from '@/lib/linkage'
+import type { MechanismResult } from '@/lib/contract'
+import { findMechanism, getMechanism, mechanismChoiceMessage, nonNegative, num, positive, type BuiltInMechanismInput, type Geometry } from '@/lib/mechanisms'
 import { ENGINE_VERSION } from './version'
 
 /*
  * Input of the straight-line linkage calc. Keys are stable (scripts and saved
  * revisions use them). Lengths mm, forces N, angles degrees. Numbers arrive as
- * JSON numbers here; form layers coerce strings before parsing.
+ * JSON numbers here; form layers coerce strings before parsing. `geometry` is
+ * checked by the schema of the mechanism the registry (lib/mechanisms) names.
  */
-const num = () => z.number({ error: (iss) => (iss.input === undefined ? 'is required' : 'must be a number') })
-const positive = () => num().positive({ error: 'must be positive' })
-const nonNegative = () => num().nonnegative({ error: 'must not be negative' })
-
 const load = z.object({
   name: z.string({ error: 'must be a text' }).min(1, { error: 'must not be empty' }),
   fx: num(),
@@ -42,55 +40,56 @@ const common = {
   amplificationLimit: num().gt(1, { error: 'must be greater than 1' }).default(100),
 }
 
-const peaucellier = z.object({
-  mechanism: z.literal('peaucellier'),
-  geometry: z.object({ arm: positive(), side: positive(), crank: positive(), crankPivotOffset: nonNegative().optional() }),
-  ...common,
-})
+const mechanismId = z.string({ error: () => mechanismChoiceMessage() }).refine((id) => findMechanism(id) !== undefined, { error: () => mechanismChoiceMessage() })
 
-const hart = z.object({
-  mechanism: z.literal('hart'),
-  geometry: z.object({
-    long: positive(),
-    short: positive(),
-    ratio: num().gt(0, { error: 'must be between 0 and 1' }).lt(1, { error: 'must be between 0 and 1' }),
-    crank: positive(),
-    crankPivotOffset: nonNegative().optional(),
-  }),
-  ...common,
-})
+/** The common keys of every mechanism; `geometry` is checked against the named mechanism's schema below. */
+export const mechanismCommonSchema = z.object({ mechanism: mechanismId, geometry: z.unknown().optional(), ...common })
 
-export const mechanismInputSchema = z
-  .discriminatedUnion('mechanism', [peaucellier, hart], { error: 'must be "peaucellier" or "hart"' })
-  .superRefine((v, ctx) => {
-    if (v.sweep && v.crankAnglesDeg) ctx.addIssue({ code: 'custom', path: ['crankAnglesDeg'], message: 'give either sweep or crankAnglesDeg, not both' })
-    const names = new Set<string>()
-    v.loads.forEach((l, i) => {
-      if (names.has(l.name)) ctx.addIssue({ code: 'custom', path: ['loads', i, 'name'], message: `repeats the load case name "${l.name}"` })
-      names.add(l.name)
-    })
-  })
+/**
+ * The calc's mechanism input for whatever the registry holds when it parses (a discriminated union on
+ * `mechanism`, built at parse time, so a mechanism registered later is accepted too). Every field error
+ * is reported at once: geometry errors beside errors in the loads.
+ */
+export const mechanismInputSchema = mechanismCommonSchema
+  .superRefine(
+    (v, ctx) => {
+      const def = typeof v.mechanism === 'string' ? findMechanism(v.mechanism) : undefined
+      if (def && v.geometry === undefined) ctx.addIssue({ code: 'custom', path: ['geometry'], message: 'is required' })
+      else if (def) {
+        const g = def.geometry.safeParse(v.geometry)
+        if (!g.success) for (const issue of g.error.issues) ctx.addIssue({ code: 'custom', path: ['geometry', ...issue.path], message: issue.message })
+      }
+      if (v.sweep && v.crankAnglesDeg) ctx.addIssue({ code: 'custom', path: ['crankAnglesDeg'], message: 'give either sweep or crankAnglesDeg, not both' })
+      const names = new Set<string>()
+      if (Array.isArray(v.loads)) {
+        v.loads.forEach((l, i) => {
+          if (!l || typeof l.name !== 'string') return
+          if (names.has(l.name)) ctx.addIssue({ code: 'custom', path: ['loads', i, 'name'], message: `repeats the load case name "${l.name}"` })
+          names.add(l.name)
+        })
+      }
+    },
+    { when: () => true },
+  )
+  .transform((v) => ({ ...v, geometry: getMechanism(v.mechanism).geometry.parse(v.geometry) as Geometry }))
 
-export type MechanismInput = z.input<typeof mechanismInputSchema>
-type ParsedInput = z.output<typeof mechanismInputSchema>
-
-function cellOf(input: ParsedInput): InversorCell {
-  return input.mechanism === 'peaucellier'
-    ? peaucellierCell({ arm: input.geometry.arm, side: input.geometry.side })
-    : hartCell({ long: input.geometry.long, short: input.geometry.short, ratio: input.geometry.ratio })
-}
+/** The input of any registered mechanism, as the schema reads it (geometry unchecked by the type). */
+export type AnyMechanismInput = z.input<typeof mechanismInputSchema>
+/** A typed input of a built-in mechanism: what code that builds inputs (tests, benches) writes. */
+export type MechanismInput = Omit<AnyMechanismInput, 'mechanism' | 'geometry'> & BuiltInMechanismInput
+export type ParsedMechanismInput = z.output<typeof mechanismInputSchema>
 
 /**
  * Runs the calc. Geometric infeasibility is a result (feasibility.ok = false,
  * no positions), not an exception; only a malformed input throws (ZodError).
  */
-export function runMechanism(raw: MechanismInput): MechanismResult {
+export function runMechanism(raw: MechanismInput | AnyMechanismInput): MechanismResult {
   const input = mechanismInputSchema.parse(raw)
-  const g = input.geometry
+  const { cell, crank, offset } = getMechanism(input.mechanism).model(input.geometry)
   const out = analyse({
-    cell: cellOf(input),
-    crank: g.crank,
-    offset: g.crankPivotOffset ?? g.crank,
+    cell,
+    crank,
+    offset,
     loads: input.loads,
     selfWeight: input.selfWeight,
     sweep: input.sweep,

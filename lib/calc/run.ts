@@ -1,23 +1,17 @@
 import { checksInputSchema, ChecksInputError, runChecks, type ChecksInput } from '@/lib/checks'
 import { fieldErrorsOf } from '@/lib/schemas/field-errors'
 import { GENERAL_CAUTION } from '@/lib/cautions'
-import { mechanismInputSchema, runMechanism, type MechanismInput } from './mechanism'
+import { mechanismInputSchema, runMechanism, type AnyMechanismInput } from './mechanism'
 import { tex as texNumber } from '@/lib/linkage/tex'
-import type { CheckItem, MechanismResult, Step } from './types'
+import type { CalcResult, CalcVerdict, CheckItem, MechanismResult, Step } from '@/lib/contract'
+
+export type { CalcResult, CalcVerdict }
 
 /** A linkage calc: the mechanism and its loads, plus the pin and link descriptions and the design basis. */
 export interface CalcInput {
-  mechanism: MechanismInput
+  mechanism: AnyMechanismInput
   checks: ChecksInput | null
 }
-
-export interface CalcVerdict {
-  pass: boolean
-  maxUtilisation: number
-  governing: string
-}
-
-export type CalcResult = MechanismResult & { checks: CheckItem[]; cautions: string[]; verdict: CalcVerdict }
 
 export type ParsedCalcInput = { ok: true; input: CalcInput } | { ok: false; fieldErrors: Record<string, string> }
 
@@ -34,7 +28,7 @@ export function parseCalcInput(raw: unknown): ParsedCalcInput {
     ...(checks && !checks.success ? fieldErrorsOf(checks.error) : {}),
   }
   if (!mech.success || (checks && !checks.success)) return { ok: false, fieldErrors }
-  return { ok: true, input: { mechanism: raw as MechanismInput, checks: checks?.data ?? null } }
+  return { ok: true, input: { mechanism: raw as AnyMechanismInput, checks: checks?.data ?? null } }
 }
 
 /** The machine's stroke against what the cell gives short of its toggles (symmetric about the mid position). */

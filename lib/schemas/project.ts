@@ -1,13 +1,22 @@
 import { z } from 'zod'
 import { PROJECT_ROLES } from '@/lib/review/roles'
+import { isMechanismId, mechanismIds, mechanisms, type MechanismId } from '@/lib/mechanisms'
 import { emailField } from './auth'
 
-export const CALC_TYPES = ['peaucellier', 'hart'] as const
-export type CalcType = (typeof CALC_TYPES)[number]
-export const CALC_TYPE_LABELS: Record<CalcType, string> = {
-  peaucellier: 'Peaucellier–Lipkin cell',
-  hart: "Hart's inversor",
-}
+/** A calc's type is the id of a registered mechanism (lib/mechanisms). */
+export type CalcType = MechanismId
+
+/** @deprecated Read `mechanismIds()` from `@/lib/mechanisms` (this is the list as loaded). */
+export const CALC_TYPES: readonly CalcType[] = mechanismIds()
+/** @deprecated Use `mechanismLabel(id)` from `@/lib/mechanisms` (this is the table as loaded). */
+export const CALC_TYPE_LABELS: Readonly<Record<CalcType, string>> = Object.fromEntries(mechanisms().map((m) => [m.id, m.label]))
+
+/** The mechanism field of the create-calc form and API: any registered mechanism id. */
+export const calcTypeField = z
+  .string({ error: 'Choose a mechanism.' })
+  .refine(isMechanismId, { error: 'Choose a mechanism.' })
+  .meta({ description: 'Id of a registered mechanism', examples: mechanismIds() })
+
 
 export const createCalcSchema = z.object({
   number: z
@@ -17,7 +26,7 @@ export const createCalcSchema = z.object({
     .max(40, 'Use at most 40 characters.')
     .regex(/^[A-Za-z0-9][A-Za-z0-9._/-]*$/, 'Use letters, digits and . _ / - only.'),
   title: z.string().trim().min(3, 'Give the calc a title of at least 3 characters.').max(200),
-  calcType: z.enum(CALC_TYPES, { message: 'Choose a mechanism.' }),
+  calcType: calcTypeField,
 })
 
 export const inviteSchema = z.object({

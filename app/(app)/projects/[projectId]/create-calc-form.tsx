@@ -4,10 +4,10 @@ import Link from 'next/link'
 import { useActionState } from 'react'
 import { mutate } from 'swr'
 import { Field, FormMessage, SelectField, SubmitButton } from '@/app/_components/form'
-import { CALC_TYPES, CALC_TYPE_LABELS } from '@/lib/schemas/project'
+import { mechanisms } from '@/lib/mechanisms'
 import { createCalcAction } from './actions'
 
-const TYPE_OPTIONS = CALC_TYPES.map((t) => ({ value: t, label: CALC_TYPE_LABELS[t] }))
+const TYPE_OPTIONS = mechanisms().map((m) => ({ value: m.id, label: m.label }))
 
 export function CreateCalcForm({ projectId }: { projectId: string }) {
   const [state, action] = useActionState(async (prev: Parameters<typeof createCalcAction>[0], fd: FormData) => {

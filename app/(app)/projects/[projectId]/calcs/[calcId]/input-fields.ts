@@ -1,4 +1,4 @@
-import type { CalcType } from '@/lib/schemas/project'
+import { getMechanism, mechanismComponents, type MechanismId as CalcType } from '@/lib/mechanisms'
 
 export interface InputFieldDef {
   path: string
@@ -9,21 +9,9 @@ export interface InputFieldDef {
   options?: readonly { value: string; label: string }[]
 }
 
-/** The editor's fields as data: path in the calc input JSON, label, unit. */
-export const GEOMETRY_FIELDS: Record<CalcType, InputFieldDef[]> = {
-  peaucellier: [
-    { path: 'geometry.arm', label: 'Arm l', unit: 'mm', hint: 'pole O to rhombus vertices A and B' },
-    { path: 'geometry.side', label: 'Rhombus side s', unit: 'mm' },
-    { path: 'geometry.crank', label: 'Crank r', unit: 'mm' },
-    { path: 'geometry.crankPivotOffset', label: 'Crank pivot offset e', unit: 'mm', hint: 'e = r gives the straight line' },
-  ],
-  hart: [
-    { path: 'geometry.long', label: 'Long links a', unit: 'mm' },
-    { path: 'geometry.short', label: 'Short links b', unit: 'mm' },
-    { path: 'geometry.ratio', label: 'Ratio μ', unit: '—', step: '0.01', hint: 'places pole, driven point and tracer' },
-    { path: 'geometry.crank', label: 'Crank r', unit: 'mm' },
-    { path: 'geometry.crankPivotOffset', label: 'Crank pivot offset e', unit: 'mm', hint: 'e = r gives the straight line' },
-  ],
+/** The editor's geometry fields, as the mechanism declares them (lib/mechanisms). */
+export function geometryFields(calcType: CalcType): InputFieldDef[] {
+  return getMechanism(calcType).fields.map((f) => ({ path: `geometry.${f.key}`, label: f.label, unit: f.unit, hint: f.hint, step: f.step }))
 }
 
 export const STROKE_FIELDS: InputFieldDef[] = [
@@ -81,20 +69,17 @@ export const LINK_FIELDS = (materials: readonly string[]): InputFieldDef[] => [
   { path: 'defaults.link.material', label: 'Link material', options: materialOptions(materials) },
 ]
 
-/** Joint and link names of each cell (docs/engine.md), for per-component overrides of the defaults. */
-export const COMPONENTS: Record<CalcType, { joints: string[]; links: string[] }> = {
-  peaucellier: { joints: ['O', 'C', 'A', 'B', 'P', 'T'], links: ['OA', 'OB', 'AP', 'BP', 'AT', 'BT', 'CP'] },
-  hart: { joints: ['O', 'C', 'A', 'B', 'D', 'E', 'P', 'T'], links: ['AD', 'AE', 'BD', 'BE', 'CP'] },
-}
-
 /** Only the sizes an engineer typically changes per component; anything else stays on the defaults. */
-export const OVERRIDE_FIELDS = (calcType: CalcType): InputFieldDef[] => [
-  ...COMPONENTS[calcType].joints.flatMap((j) => [
-    { path: `joints.${j}.pinDiameter`, label: `${j}: pin d`, unit: 'mm', step: '0.1' },
-    { path: `joints.${j}.holeDiameter`, label: `${j}: hole d₀`, unit: 'mm', step: '0.1' },
-  ]),
-  ...COMPONENTS[calcType].links.flatMap((l) => [
-    { path: `links.${l}.section.width`, label: `${l}: width`, unit: 'mm', step: '0.5' },
-    { path: `links.${l}.section.thickness`, label: `${l}: thickness`, unit: 'mm', step: '0.5' },
-  ]),
-]
+export const OVERRIDE_FIELDS = (calcType: CalcType): InputFieldDef[] => {
+  const { joints, links } = mechanismComponents(calcType)
+  return [
+    ...joints.flatMap((j) => [
+      { path: `joints.${j}.pinDiameter`, label: `${j}: pin d`, unit: 'mm', step: '0.1' },
+      { path: `joints.${j}.holeDiameter`, label: `${j}: hole d₀`, unit: 'mm', step: '0.1' },
+    ]),
+    ...links.flatMap((l) => [
+      { path: `links.${l}.section.width`, label: `${l}: width`, unit: 'mm', step: '0.5' },
+      { path: `links.${l}.section.thickness`, label: `${l}: thickness`, unit: 'mm', step: '0.5' },
+    ]),
+  ]
+}

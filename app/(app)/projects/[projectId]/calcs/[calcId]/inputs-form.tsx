@@ -5,11 +5,11 @@ import { useState, useTransition } from 'react'
 import { useFieldArray, useForm, type FieldValues, type Path, type UseFormReturn } from 'react-hook-form'
 import { FieldError, FormMessage } from '@/app/_components/form'
 import type { ActionState } from '@/app/_lib/action'
-import type { CalcType } from '@/lib/schemas/project'
+import type { MechanismId as CalcType } from '@/lib/mechanisms'
 import { saveInputsAction } from './actions'
 import { convertInputs, unitFor } from './units'
 import type { UnitSystem } from '@/lib/units'
-import { BASIS_FIELDS, BASIS_OPTIONS, FACTOR_FIELDS, GEOMETRY_FIELDS, LINK_FIELDS, OVERRIDE_FIELDS, PIN_FIELDS, STROKE_FIELDS, type InputFieldDef } from './input-fields'
+import { BASIS_FIELDS, BASIS_OPTIONS, FACTOR_FIELDS, geometryFields, LINK_FIELDS, OVERRIDE_FIELDS, PIN_FIELDS, STROKE_FIELDS, type InputFieldDef } from './input-fields'
 
 type Values = FieldValues & { loads: { name: string; fx: number; fy: number }[]; basis: { kind: string }; displayUnits?: UnitSystem }
 
@@ -87,7 +87,7 @@ export function InputsForm(props: { projectId: string; calcId: string; calcType:
   const router = useRouter()
   const [system, setSystem] = useState<UnitSystem>(initial.displayUnits === 'US' ? 'US' : 'SI')
   const allDefs = (kind: string) =>
-    [GEOMETRY_FIELDS[calcType], STROKE_FIELDS, BASIS_FIELDS[kind] ?? [], FACTOR_FIELDS, PIN_FIELDS(materials), LINK_FIELDS(materials), OVERRIDE_FIELDS(calcType)].flat()
+    [geometryFields(calcType), STROKE_FIELDS, BASIS_FIELDS[kind] ?? [], FACTOR_FIELDS, PIN_FIELDS(materials), LINK_FIELDS(materials), OVERRIDE_FIELDS(calcType)].flat()
   const form = useForm<Values>({ defaultValues: convertInputs(initial, allDefs(initial.basis.kind), system, 'toDisplay') })
   const loads = useFieldArray({ control: form.control, name: 'loads' })
   const [errors, setErrors] = useState<Record<string, string>>({})
@@ -134,7 +134,7 @@ export function InputsForm(props: { projectId: string; calcId: string; calcType:
         )}
       </div>
       <FormMessage state={state} />
-      <Group title="Geometry">{GEOMETRY_FIELDS[calcType].map(field)}</Group>
+      <Group title="Geometry">{geometryFields(calcType).map(field)}</Group>
       <Group title="Stroke">{STROKE_FIELDS.map(field)}</Group>
       <fieldset className="flex flex-col gap-2 border-t border-rule pt-3">
         <legend className="h2 pr-2">Load cases at the tracer [{system === 'US' ? 'lbf' : 'N'}]</legend>

@@ -1,0 +1,18 @@
+/** Peaucellier–Lipkin cell: arms l from the pole to A and B, rhombus APBT of side s (docs/engine.md). */
+import { peaucellierCell } from '@/lib/linkage/cells/peaucellier'
+import { CRANK_FIELDS, withCrank } from '../crank'
+import { positive } from '../numbers'
+import { defineMechanism } from '../types'
+
+export const peaucellier = defineMechanism({
+  id: 'peaucellier',
+  label: 'Peaucellier–Lipkin cell',
+  geometry: withCrank({ arm: positive(), side: positive() }),
+  fields: [
+    { key: 'arm', label: 'Arm l', description: 'Arm length l (pole to outer rhombus vertices)', unit: 'mm', hint: 'pole O to rhombus vertices A and B' },
+    { key: 'side', label: 'Rhombus side s', description: 'Rhombus side s', unit: 'mm' },
+    ...CRANK_FIELDS,
+  ],
+  defaultGeometry: { arm: 250, side: 100, crank: 100, crankPivotOffset: 100 },
+  model: (g) => ({ cell: peaucellierCell({ arm: g.arm, side: g.side }), crank: g.crank, offset: g.crankPivotOffset }),
+})
