@@ -1,0 +1,104 @@
+/**
+ * The printed working must show the numbers that were checked: for every check
+ * of every basis, over random components, the step's substituted text prints the
+ * capacity (and the demand, or the demand is the design force printed in the
+ * component's force step), the step's value is the utilisation and its source
+ * is the clause — and the clause is never empty and names its standard.
+ * A calc package whose working disagrees with its verdict cannot be checked by hand.
+ */
+import { describe, expect, it } from 'vitest'
+import fc from 'fast-check'
+import { checkComponent, checksInputSchema } from '@/lib/checks'
+import { HAND_MATERIALS, printedNumbers, samePrinted, type Item, type StepLike } from './_hand'
+
+const CLAUSE: Record<string, RegExp> = {
+  en1993: /^EN 1993-1-[18]:2005 §\d/,
+  aisc360: /^(AISC 360-16 §[DEFHJ]\d|not a D5\/J7 provision: shear by analogy with §J3\.6)/,
+  allowable: /^(Shigley's Mechanical Engineering Design: |plain mechanics: |two shear planes of length a; |EN 1993-1-8:2005 Fig\. 3\.11 |single shear: couple)/,
+}
+
+const prints = (tex: string | undefined, v: number) => printedNumbers(tex ?? '').some((p) => samePrinted(p, v))
+
+function verify(kind: string, r: { checks: Item[]; steps: StepLike[] }): void {
+  const force = r.steps.find((s) => s.id.endsWith('.force'))
+  expect(force).toBeDefined()
+  for (const c of r.checks) {
+    const step = r.steps.find((s) => s.id === c.stepId)
+    expect(step, c.stepId).toBeDefined()
+    const tex = step!.substituted
+    const where = `${c.stepId}: ${tex}`
+    expect(c.clause.trim().length, c.stepId).toBeGreaterThan(10)
+    expect(c.clause, c.stepId).toMatch(CLAUSE[kind])
+    expect(step!.source).toBe(c.clause)
+    if (!(c.unit === '—' && c.capacity === 1)) expect(prints(tex, c.capacity), `capacity ${c.capacity} not printed in ${where}`).toBe(true)
+    expect(prints(tex, c.demand) || prints(force!.substituted, c.demand), `demand ${c.demand} not printed in ${where}`).toBe(true)
+    expect(c.utilisation).toBeCloseTo(c.demand / c.capacity, 12)
+    expect(step!.value).toBe(Number(c.utilisation.toFixed(4)))
+    expect(step!.verdict).toBe(c.pass ? 'pass' : 'fail')
+    expect(c.pass).toBe(c.utilisation <= 1 + 1e-9)
+  }
+}
+
+const basis = fc.oneof(
+  fc.record({ kind: fc.constant('allowable'), factorOfSafety: fc.double({ min: 1.2, max: 4, noNaN: true }) }),
+  fc.record({
+    kind: fc.constant('en1993'),
+    gammaM0: fc.double({ min: 1, max: 1.3, noNaN: true }),
+    gammaM1: fc.double({ min: 1, max: 1.3, noNaN: true }),
+    gammaM2: fc.double({ min: 1.1, max: 1.4, noNaN: true }),
+    gammaM6ser: fc.double({ min: 1, max: 1.3, noNaN: true }),
+  }),
+  fc.record({ kind: fc.constant('aisc360'), method: fc.constantFrom('LRFD', 'ASD') }),
+)
+const size = (min: number, max: number) => fc.double({ min, max, noNaN: true }).map((x) => Math.round(x * 100) / 100)
+const mat = fc.constantFrom('Pin400', 'Plate250', 'Bar300', 'S355', 'C45+QT')
+
+describe('printed working equals the checked values', () => {
+  it('pins: every basis, fork and lap, replaceable or not', () => {
+    fc.assert(
+      fc.property(basis, size(5, 60), size(0, 2), size(2, 30), size(2, 30), size(0, 5), size(100, 5e5), fc.boolean(), fc.boolean(), mat, mat, (b, d, cl, t1, t2, gap, F, single, repl, pm, qm) => {
+        const input = checksInputSchema.parse({
+          basis: b,
+          factors: { load: 1.35, dynamic: 1.1 },
+          materials: HAND_MATERIALS,
+          joints: { J: { pinDiameter: d, holeDiameter: d + cl, pinMaterial: pm, arrangement: single ? 'single' : 'double', middle: { thickness: t1, material: qm }, outer: { thickness: t2 }, gap, replaceable: repl } },
+        })
+        verify(b.kind, checkComponent(input, 'J', { kind: 'joint', force: F }) as never)
+      }),
+      { numRuns: 150 },
+    )
+  })
+  it('links: every basis, flat, round and tube, with and without a moment, Table 3.9 A and B', () => {
+    const section = fc.oneof(
+      fc.record({ shape: fc.constant('flat'), width: size(20, 120), thickness: size(3, 30) }),
+      fc.record({ shape: fc.constant('round'), diameter: size(8, 80) }),
+      size(20, 120).chain((D) => fc.record({ shape: fc.constant('tube'), outerDiameter: fc.constant(D), wall: size(1, D / 2 - 1) })),
+    )
+    fc.assert(
+      fc.property(
+        basis,
+        section,
+        size(5, 40),
+        size(0.1, 2),
+        size(1, 40),
+        size(2, 40),
+        size(0.5, 2),
+        fc.constantFrom('A', 'B'),
+        size(0, 3e5),
+        size(0, 3e5),
+        fc.option(size(1, 5e6), { nil: undefined }),
+        mat,
+        (b, sec, d, cl, extraW, t, K, type, T, C, M, m) => {
+          const w = d + cl + extraW
+          const input = checksInputSchema.parse({
+            basis: b,
+            materials: HAND_MATERIALS,
+            links: { L: { section: sec, material: m, eye: { thickness: t, width: w, pinDiameter: d, holeDiameter: d + cl, edgeAlong: extraW, table39Type: type }, length: 20 * d, effectiveLengthFactor: K } },
+          })
+          verify(b.kind, checkComponent(input, 'L', { kind: 'link', tension: T, compression: C, moment: M }) as never)
+        },
+      ),
+      { numRuns: 150 },
+    )
+  })
+})
