@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest'
-import { GEOMETRY_FIELDS, PIN_FIELDS } from '@/app/(app)/projects/[projectId]/calcs/[calcId]/input-fields'
+import { geometryFields, PIN_FIELDS } from '@/app/(app)/projects/[projectId]/calcs/[calcId]/input-fields'
 import { convertInputs } from '@/app/(app)/projects/[projectId]/calcs/[calcId]/units'
 
 // 1 in = 25.4 mm and 1 lbf = 4.4482216152605 N exactly (NIST SP 811, Appendix B).
-const defs = [...GEOMETRY_FIELDS.peaucellier, ...PIN_FIELDS(['S355'])]
+const defs = [...geometryFields('peaucellier'), ...PIN_FIELDS(['S355'])]
 const si = {
   geometry: { arm: 254, side: 101.6, crank: 127, crankPivotOffset: 127 },
   loads: [{ name: 'a', fx: 4.4482216152605, fy: -444.82216152605 }],
