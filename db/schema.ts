@@ -1,6 +1,7 @@
 import { sql } from 'drizzle-orm'
 import { index, integer, primaryKey, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core'
-import type { ProjectRole, RevisionState } from '@/lib/review/roles'
+import type { ProjectRole } from '@/lib/review/roles'
+import type { RevisionState } from '@/lib/review/workflow'
 
 const id = () => text('id').primaryKey()
 const createdAt = () =>

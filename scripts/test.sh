@@ -13,6 +13,9 @@ if [ ${#need[@]} -gt 0 ]; then
 fi
 
 report=$(mktemp -d)
+# Layer rules (DEVELOPERS.md): a violation fails the run like a failing test.
+npm run -s lint:deps
+layers=$?
 NODE_ENV=test npx vitest run --reporter=default --reporter=json --outputFile.json="$report/vitest.json"
 unit=$?
 
@@ -35,4 +38,4 @@ console.log(`unit+integration: ${v.numPassedTests} passed, ${v.numFailedTests} f
 console.log(`${passed} passed, ${failed} failed`)
 ' "$report/vitest.json" "$report/e2e.json"
 
-[ "$unit" -eq 0 ] && [ "$e2e" -eq 0 ]
+[ "$layers" -eq 0 ] && [ "$unit" -eq 0 ] && [ "$e2e" -eq 0 ]

@@ -83,12 +83,11 @@ export function openApiDocument(): object {
   const registry = new OpenAPIRegistry()
   const bearer = registry.registerComponent('securitySchemes', 'bearerToken', { type: 'http', scheme: 'bearer', description: 'A personal API token (settings page, or `npm run token`)' })
   const cookie = registry.registerComponent('securitySchemes', 'session', { type: 'apiKey', in: 'cookie', name: 'inverso_session' })
-  const error = registry.register('Error', errorBody)
   for (const op of OPERATIONS) {
     const responses: RouteConfig['responses'] = {
       [op.ok.status]: op.ok.pdf ? { description: op.ok.description, content: { 'application/pdf': { schema: { type: 'string', format: 'binary' } } } } : json(op.ok.schema!, op.ok.description),
     }
-    for (const code of op.errors) responses[code] = json(error, ERRORS[code])
+    for (const code of op.errors) responses[code] = json(errorBody, ERRORS[code])
     registry.registerPath({
       method: op.method,
       path: op.path,

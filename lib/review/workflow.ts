@@ -117,3 +117,6 @@ export function transitionsFrom(state: RevisionState): TransitionSpec[] {
 export function stateLabel(state: RevisionState): string {
   return STATES[state].label
 }
+
+/** State names by state, read from the table. */
+export const STATE_LABELS = Object.fromEntries(REVISION_STATES.map((s) => [s, STATES[s].label])) as Record<RevisionState, string>

@@ -4,7 +4,8 @@ import { db } from '@/db'
 import { mailTokens, projectMembers, users } from '@/db/schema'
 import { seedDemo } from '@/server/demo/seed'
 import { DEMO_PASSWORD, DEMO_USERS } from '@/server/demo/demo-data'
-import { acceptInvitation, findToken, inviteMember } from '@/server/auth/invitations'
+import { acceptInvitation, findToken } from '@/server/auth/invitations'
+import { inviteMember } from '@/server/members'
 import { requestPasswordReset, resetPassword } from '@/server/auth/password-reset'
 import { MAX_FAILURES, signIn } from '@/server/auth/sign-in'
 import { hashToken } from '@/server/auth/tokens'
@@ -58,7 +59,7 @@ describe('invitations', () => {
   it('sends an invitation the fake catches; its link sets a password and adds the membership', async () => {
     const a = await admin()
     const [{ projectId }] = await db.select({ projectId: projectMembers.projectId }).from(projectMembers).limit(1)
-    await inviteMember({ projectId, email: 'New.Checker@Feldmark.example', role: 'checker', invitedBy: { id: a.id, name: a.name } })
+    await inviteMember({ ...a, isAdmin: true }, projectId, { email: 'New.Checker@Feldmark.example', role: 'checker' })
     const token = tokenFromLatestMail('new.checker@feldmark.example')
     const { session } = await acceptInvitation({ token, name: 'Nela Checker', password: 'a-long-password' })
     expect(session.userId).toBeTruthy()
@@ -72,7 +73,7 @@ describe('invitations', () => {
   it('an expired invitation gets a clear message and creates nothing', async () => {
     const a = await admin()
     const [{ projectId }] = await db.select({ projectId: projectMembers.projectId }).from(projectMembers).limit(1)
-    await inviteMember({ projectId, email: 'late@feldmark.example', role: 'approver', invitedBy: { id: a.id, name: a.name } })
+    await inviteMember({ ...a, isAdmin: true }, projectId, { email: 'late@feldmark.example', role: 'approver' })
     const token = tokenFromLatestMail('late@feldmark.example')
     await db.update(mailTokens).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(mailTokens.tokenHash, hashToken(token)))
     const err = await findToken(token, 'invite').catch((e: AppError) => e)
@@ -85,7 +86,7 @@ describe('invitations', () => {
     const a = await admin()
     const [{ projectId }] = await db.select({ projectId: projectMembers.projectId }).from(projectMembers).limit(1)
     await expectAppError(
-      inviteMember({ projectId, email: DEMO_USERS[1].email, role: 'checker', invitedBy: { id: a.id, name: a.name } }),
+      inviteMember({ ...a, isAdmin: true }, projectId, { email: DEMO_USERS[1].email, role: 'checker' }),
       'conflict',
       'email',
     )

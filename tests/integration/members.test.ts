@@ -3,34 +3,34 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { db } from '@/db'
 import { getActor } from '@/db/queries'
 import { changeMemberRole, removeMember } from '@/server/members'
-import { projectMembers, projects, users } from '@/db/schema'
-import { DEMO_USERS } from '@/server/demo/demo-data'
-import { seedDemo } from '@/server/demo/seed'
+import { projectMembers, users } from '@/db/schema'
+import type { Caller } from '@/server/access'
+import { seededDemo, type DemoRole } from '../helpers/demo'
 import { AppError } from '@/lib/errors'
 import { can } from '@/lib/review/permissions'
 import { useTempEnvironment } from '../helpers/temp-env'
 
 let env: Awaited<ReturnType<typeof useTempEnvironment>>
 let projectId = ''
-const id: Record<string, string> = {}
+let who: Record<DemoRole, Caller>
+const id = {} as Record<DemoRole, string>
 beforeAll(async () => {
   env = await useTempEnvironment()
-  await seedDemo(db)
-  projectId = (await db.select().from(projects))[0].id
-  for (const u of DEMO_USERS) id[u.key] = (await db.select().from(users).where(eq(users.email, u.email)))[0].id
+  ;({ people: who, projectId } = await seededDemo())
+  for (const [k, c] of Object.entries(who)) id[k as DemoRole] = c.id
 })
 afterAll(() => env.close())
 
 describe('member management', () => {
   it('a role change takes effect on the next permission check', async () => {
-    await changeMemberRole(projectId, id.approver, 'checker', id.admin)
+    await changeMemberRole(who.admin, projectId, id.approver, 'checker')
     const actor = await getActor({ id: id.approver, isAdmin: false }, projectId)
     expect(can(actor, 'calc.check')).toBe(true)
     expect(can(actor, 'calc.approve')).toBe(false)
   })
 
   it('a removed member loses access to the project but keeps the account', async () => {
-    await removeMember(projectId, id.checker, id.admin)
+    await removeMember(who.admin, projectId, id.checker)
     const actor = await getActor({ id: id.checker, isAdmin: false }, projectId)
     expect(can(actor, 'project.view')).toBe(false)
     expect(await db.select().from(users).where(eq(users.id, id.checker))).toHaveLength(1)
@@ -38,7 +38,7 @@ describe('member management', () => {
   })
 
   it('changing someone who is not a member is a clear not-found', async () => {
-    const err = await removeMember(projectId, id.checker, id.admin).catch((e: AppError) => e)
+    const err = await removeMember(who.admin, projectId, id.checker).catch((e: AppError) => e)
     expect((err as AppError).code).toBe('not_found')
   })
 })
@@ -46,8 +46,8 @@ describe('member management', () => {
 describe('projects', () => {
   it('a second project with the same code is refused at the code field', async () => {
     const { createProject } = await import('@/server/projects')
-    await createProject({ code: 'FM-LT12', name: 'Lid tucker LT-12', client: 'Feldmark' }, id.admin)
-    const err = await createProject({ code: 'FM-LT12', name: 'Again', client: '' }, id.admin).catch((e: AppError) => e)
+    await createProject(who.admin, { code: 'FM-LT12', name: 'Lid tucker LT-12', client: 'Feldmark' })
+    const err = await createProject(who.admin, { code: 'FM-LT12', name: 'Again', client: '' }).catch((e: AppError) => e)
     expect((err as AppError).code).toBe('conflict')
     expect((err as AppError).fieldErrors?.code).toMatch(/already uses the code/)
   })

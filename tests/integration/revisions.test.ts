@@ -2,25 +2,27 @@ import { eq } from 'drizzle-orm'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { db } from '@/db'
 import { loadReportPackage } from '@/server/report-package'
-import { advanceRevision, nextRevisionLabel, saveRevision, type RevisionDeps } from '@/server/revisions'
-import { calcs, revisions, users } from '@/db/schema'
-import { seedDemo } from '@/server/demo/seed'
-import { DEMO_USERS } from '@/server/demo/demo-data'
-import { saveDraftInputs } from '@/server/calc-drafts'
+import { nextRevisionLabel, saveRevision, transitionRevision, type RevisionDeps } from '@/server/revisions'
+import { calcs, revisions } from '@/db/schema'
+import { saveInputs } from '@/server/calcs'
+import { changeMemberRole } from '@/server/members'
+import type { Caller } from '@/server/access'
 import { localFileStore } from '@/lib/storage'
 import { renderPdf } from '@/reports'
 import { canonicalJson, sha256Hex } from '@/reports/hash'
+import { seededDemo, type DemoRole } from '../helpers/demo'
 import { useTempEnvironment } from '../helpers/temp-env'
 
 let env: Awaited<ReturnType<typeof useTempEnvironment>>
 let deps: RevisionDeps
-const people: Record<string, string> = {}
+let people: Record<DemoRole, Caller>
+let projectId = ''
+let calcId: (n: string) => Promise<string>
 
 beforeAll(async () => {
   env = await useTempEnvironment()
   deps = { renderer: { renderPdf }, store: localFileStore(`${env.dir}/files`) }
-  await seedDemo(db)
-  for (const u of DEMO_USERS) people[u.key] = (await db.select().from(users).where(eq(users.email, u.email)))[0].id
+  ;({ people, projectId, calcId } = await seededDemo())
 }, 120_000)
 afterAll(() => env.close())
 
@@ -32,6 +34,8 @@ async function refused(p: Promise<unknown>, pattern: RegExp) {
 }
 
 const calcByNumber = async (n: string) => (await db.select().from(calcs).where(eq(calcs.number, n)))[0]
+const save = async (n: string, who: Caller) => saveRevision(who, projectId, await calcId(n), deps)
+const move = async (n: string, rev: string, action: string, who: Caller) => transitionRevision(who, projectId, await calcId(n), rev, action, deps)
 const revision = async (id: string) => (await db.select().from(revisions).where(eq(revisions.id, id)))[0]
 
 describe('revision labels', () => {
@@ -50,7 +54,7 @@ describe('saving and signing a revision', () => {
   let revId = ''
 
   it('freezes inputs, result, versions and hashes; the content hash is recomputable from the row', async () => {
-    revId = await saveRevision(await calcByNumber('LC-001'), people.engineer, deps)
+    revId = await save('LC-001', people.engineer)
     const rev = await revision(revId)
     expect(rev.label).toBe('A')
     expect(rev.state).toBe('in-check')
@@ -70,23 +74,22 @@ describe('saving and signing a revision', () => {
     await refused(db.update(revisions).set({ inputs: { tampered: true } }).where(eq(revisions.id, revId)), /revision content is frozen/)
   })
 
-  it('independence: the engineer cannot check their own revision', async () => {
-    await expect(advanceRevision(await calcByNumber('LC-001'), revId, 'check', people.engineer, deps)).rejects.toThrow(/two roles/)
+  it('the engineer’s role cannot check a revision (permission table)', async () => {
+    await expect(move('LC-001', revId, 'check', people.engineer)).rejects.toThrow(/does not allow this \(calc.check\)/)
   })
 
   it('steps must go in order: approving an unchecked revision is refused', async () => {
-    await expect(advanceRevision(await calcByNumber('LC-001'), revId, 'approve', people.approver, deps)).rejects.toThrow(/in-check/)
+    await expect(move('LC-001', revId, 'approve', people.approver)).rejects.toThrow(/only a revision that is checked/)
   })
 
   it('check → approve → issue signs the revision, and an issued revision can no longer change', async () => {
-    const calc = await calcByNumber('LC-001')
-    await advanceRevision(calc, revId, 'check', people.checker, deps)
-    await advanceRevision(calc, revId, 'approve', people.approver, deps)
-    await advanceRevision(calc, revId, 'issue', people.approver, deps)
+    await move('LC-001', revId, 'check', people.checker)
+    await move('LC-001', revId, 'approve', people.approver)
+    await move('LC-001', revId, 'issue', people.approver)
     const rev = await revision(revId)
     expect(rev.state).toBe('issued')
-    expect(rev.checkerId).toBe(people.checker)
-    expect(rev.approverId).toBe(people.approver)
+    expect(rev.checkerId).toBe(people.checker.id)
+    expect(rev.approverId).toBe(people.approver.id)
     expect((await calcByNumber('LC-001')).state).toBe('issued')
     // The signed PDF is reproducible from the frozen row.
     expect(sha256Hex(await renderPdf(await loadReportPackage(revId)))).toBe(rev.pdfHash)
@@ -96,15 +99,24 @@ describe('saving and signing a revision', () => {
   }, 120_000)
 
   it('issuing revision B supersedes the issued revision A', async () => {
-    const calc = await calcByNumber('LC-001')
-    const b = await saveRevision(calc, people.engineer, deps)
-    await advanceRevision(calc, b, 'check', people.checker, deps)
-    await advanceRevision(calc, b, 'approve', people.approver, deps)
-    await advanceRevision(calc, b, 'issue', people.approver, deps)
+    const b = await save('LC-001', people.engineer)
+    await move('LC-001', b, 'check', people.checker)
+    await move('LC-001', b, 'approve', people.approver)
+    await move('LC-001', b, 'issue', people.approver)
     expect((await revision(revId)).state).toBe('superseded')
     expect((await revision(b)).label).toBe('B')
     expect(sha256Hex(await renderPdf(await loadReportPackage(b)))).toBe((await revision(b)).pdfHash)
   }, 120_000)
+})
+
+describe('independence', () => {
+  it('a checker who signed a revision cannot approve it, even after being made approver', async () => {
+    const rev = await save('LC-002', people.engineer)
+    await move('LC-002', rev, 'check', people.checker)
+    await changeMemberRole(people.admin, projectId, people.checker.id, 'approver')
+    await expect(move('LC-002', rev, 'approve', people.checker)).rejects.toThrow(/two roles/)
+    await changeMemberRole(people.admin, projectId, people.checker.id, 'checker')
+  }, 60_000)
 })
 
 describe('working inputs', () => {
@@ -112,7 +124,7 @@ describe('working inputs', () => {
     const calc = await calcByNumber('LC-003')
     const before = calc.draftInputs
     const bad = { ...(before as object), geometry: { arm: 80, side: -100, crank: 60 } }
-    const outcome = await saveDraftInputs(calc, bad, people.engineer)
+    const outcome = await saveInputs(people.engineer, projectId, calc.id, bad)
     expect(outcome.ok).toBe(false)
     if (!outcome.ok) expect(Object.keys(outcome.fieldErrors)).toContain('geometry.side')
     expect((await calcByNumber('LC-003')).draftInputs).toEqual(before)
@@ -122,14 +134,14 @@ describe('working inputs', () => {
 describe('checker remarks', () => {
   it('anchor to an existing step of a revision in check; unknown steps are refused at the step field', async () => {
     const { addRemark, closeRemark, listRemarks, respondToRemark } = await import('@/server/remarks')
-    const calc = await calcByNumber('LC-002')
-    const rev = await saveRevision(calc, people.engineer, deps)
-    const err = await addRemark(calc, { revisionId: rev, stepId: 'no.such.step', text: 'Why?' }, people.checker).catch((e: { fieldErrors?: Record<string, string> }) => e)
+    const calc = await calcId('LC-002')
+    const rev = await save('LC-002', people.engineer)
+    const err = await addRemark(people.checker, projectId, calc, { revisionId: rev, stepId: 'no.such.step', text: 'Why?' }).catch((e: { fieldErrors?: Record<string, string> }) => e)
     expect((err as { fieldErrors?: Record<string, string> }).fieldErrors?.stepId).toMatch(/no step/)
-    const id = await addRemark(calc, { revisionId: rev, stepId: 'geo.inversion-constant', text: 'Please state the source of k.' }, people.checker)
-    await respondToRemark(calc, id, 'Source added: Coxeter §6.1.', people.engineer)
-    await closeRemark(calc, id, people.checker)
-    const [remark] = await listRemarks(rev)
+    const id = await addRemark(people.checker, projectId, calc, { revisionId: rev, stepId: 'geo.inversion-constant', text: 'Please state the source of k.' })
+    await respondToRemark(people.engineer, projectId, calc, id, 'Source added: Coxeter §6.1.')
+    await closeRemark(people.checker, projectId, calc, id)
+    const [remark] = await listRemarks(people.checker, projectId, calc, rev)
     expect(remark).toMatchObject({ stepId: 'geo.inversion-constant', status: 'closed', response: 'Source added: Coxeter §6.1.' })
     // The remarks log of the package lists it.
     const pkg = await loadReportPackage(rev)

@@ -14,7 +14,7 @@ import {
 } from '@tanstack/react-table'
 import { StateBadge } from '@/app/_components/state-badge'
 import { CALC_TYPE_LABELS, type CalcType } from '@/lib/schemas/project'
-import type { RevisionState } from '@/lib/review/roles'
+import type { RevisionState } from '@/lib/review/workflow'
 
 interface Row {
   id: string
