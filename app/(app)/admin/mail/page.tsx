@@ -1,8 +1,8 @@
 import type { Metadata } from 'next'
 import { notFound } from 'next/navigation'
 import { requirePageUser } from '@/app/_lib/session'
-import { listCaughtMail, mailInboxEnabled } from '@/lib/mail/inbox'
-import { can } from '@/lib/review/permissions'
+import { AppError } from '@/lib/errors'
+import { caughtMail } from '@/server/mail-inbox'
 
 export const metadata: Metadata = { title: 'Caught mail' }
 export const dynamic = 'force-dynamic'
@@ -10,8 +10,13 @@ export const dynamic = 'force-dynamic'
 /** What the local fake mail server caught. Development and demo only. */
 export default async function MailPage() {
   const user = await requirePageUser()
-  if (!mailInboxEnabled() || !can({ userId: user.id, isAdmin: user.isAdmin, role: null }, 'mail.view')) notFound()
-  const mails = listCaughtMail().slice(0, 100)
+  let mails: ReturnType<typeof caughtMail>
+  try {
+    mails = caughtMail(user)
+  } catch (err) {
+    if (err instanceof AppError) notFound()
+    throw err
+  }
   return (
     <div className="flex flex-col gap-4">
       <h1 className="h1">Caught mail</h1>
