@@ -1,5 +1,5 @@
 /**
- * The report pipeline: one MDX template per calc type, rendered either as a
+ * The report pipeline: one MDX template per mechanism, rendered either as a
  * web page (HTML + KaTeX) or as a signed-off PDF (react-pdf + MathJax paths).
  * Pure Node: no Next.js, no __dirname; templates and fonts resolve from
  * `rootDir` (default `process.cwd()`).
@@ -9,5 +9,7 @@ export { renderWebHtml, renderWebDocument } from './web/render'
 export { sha256Hex, canonicalJson } from './hash'
 export { formatValue, formatNumber, watermarkFor } from './model/format'
 export { CAUTION_BASE } from './model/views'
+export { stepOutline, type StepOutlineEntry } from './model/outline'
+export { registerReportParts, type ReportParts, type DiagramBuilder } from './mechanisms'
 export type * from './types'
 export { TEMPLATE_VERSION } from './version'

@@ -1,25 +1,32 @@
 /**
- * What a calc package is made of when it is rendered. The report reads the
- * engine's result structurally (not by importing the engine) so this module
- * compiles and renders on its own; every engine-specific piece is optional and
- * a missing piece only omits its section.
+ * What a calc package is made of when it is rendered. The result is the
+ * contract's CalcResult (lib/contract), the same object the engine and the
+ * checks produce; every piece but the steps may be missing (an infeasible
+ * geometry has no positions, a kinematics-only calc no checks), and a missing
+ * piece only omits its section.
  */
 import type {
+  CalcResult,
+  CalcVerdict,
   CheckItem,
   Feasibility,
   LinkTopology,
   LoadCaseEnvelope,
+  MechanismId,
   Point,
   PositionResult,
   Step,
+  StrokeLimits,
   Table,
-} from '../lib/calc/types'
+} from '../lib/contract'
 
-export type { CheckItem, Feasibility, LinkTopology, LoadCaseEnvelope, Point, PositionResult, Step, Table }
+export type { CalcResult, CheckItem, Feasibility, LinkTopology, LoadCaseEnvelope, MechanismId, Point, PositionResult, Step, Table }
 
 export type Paper = 'A4' | 'LETTER'
-export type CalcType = 'peaucellier' | 'hart'
-export type RevisionState = 'draft' | 'in-check' | 'checked' | 'approved' | 'issued' | 'superseded'
+/** A calc's type is the id of its mechanism in the registry (lib/mechanisms). */
+export type CalcType = MechanismId
+export type { RevisionState } from '../lib/review/workflow'
+import type { RevisionState } from '../lib/review/workflow'
 
 export interface Signatory {
   name: string
@@ -55,45 +62,17 @@ export interface Attachment {
   bytes: Uint8Array
 }
 
-export interface StrokeInfo {
-  half: number
-  crankMinDeg: number
-  crankMaxDeg: number
-  usable?: { half: number; crankMinDeg: number; crankMaxDeg: number }
-}
+export type StrokeInfo = StrokeLimits & { usable?: StrokeLimits }
 
 export interface LoadCasePositions {
   name: string
   positions: PositionResult[]
 }
 
-export interface Verdict {
-  pass: boolean
-  maxUtilisation: number
-  governing: string
-}
+export type Verdict = CalcVerdict
 
-/** The slice of the engine's result (plus checks) that the report reads. */
-export interface CalcResult {
-  inversionConstant?: number
-  lineOffset?: number
-  feasibility?: Feasibility
-  stroke?: StrokeInfo
-  /** Engine-defined description of the traced line; shown only through steps. */
-  line?: unknown
-  straightness?: unknown
-  positions?: PositionResult[]
-  loadCases?: LoadCasePositions[]
-  envelope?: LoadCaseEnvelope[]
-  links?: LinkTopology[]
-  /** Names of the ground joints, or their positions keyed by name. */
-  groundJoints?: string[] | Record<string, Point>
-  steps: Step[]
-  tables?: Table[]
-  checks?: CheckItem[]
-  cautions?: string[]
-  verdict?: Verdict
-}
+/** The result a package renders: the contract's CalcResult, where everything but the steps may be absent. */
+export type ReportResult = Pick<CalcResult, 'steps'> & Partial<Omit<CalcResult, 'steps'>>
 
 export interface ReportPackage {
   paper: Paper
@@ -109,7 +88,7 @@ export interface ReportPackage {
   history: HistoryEntry[]
   remarks: Remark[]
   inputRows: InputRow[]
-  result: CalcResult
+  result: ReportResult
   attachments: Attachment[]
   /** ISO timestamp fixed per revision: the PDF's dates come from it, so output is reproducible. */
   generatedAt: string
@@ -122,6 +101,6 @@ export interface RenderOptions {
   rootDir?: string
   /** Overrides `<rootDir>/fonts`. */
   fontsDir?: string
-  /** Overrides `<rootDir>/reports/templates`. */
+  /** Overrides `<rootDir>/reports/mechanisms` (templates at `<dir>/<id>/template.mdx`). */
   templatesDir?: string
 }

@@ -1,16 +1,14 @@
 /**
- * Renders every demo calc (the seed's inputs run through the real engine and checks) and the
- * report fixtures to out/demo: PDFs (A4 and US Letter, a draft, one with an appended
- * attachment), their pages as PNGs for a visual check, and the standalone web document.
+ * Renders every demo calc (the seed's inputs run through the real engine and checks) to out/demo:
+ * PDFs (A4 and US Letter, a draft, one in check with an appended attachment), their pages as PNGs
+ * for a visual check, and the standalone web document of each.
  */
 import { execFileSync } from 'node:child_process'
 import { mkdirSync, rmSync, writeFileSync } from 'node:fs'
 import { join } from 'node:path'
 import { PDFDocument, StandardFonts } from 'pdf-lib'
 import { renderPdf, renderWebDocument, type ReportPackage } from '../reports/index'
-import { peaucellierPackage } from '../tests/reports/fixtures/peaucellier'
-import { hartPackage } from '../tests/reports/fixtures/hart'
-import { DEMO_CALCS, demoPackage } from '../tests/reports/fixtures/demo'
+import { DEMO_CALCS, demoPackage } from '../reports/demo'
 
 
 async function sampleAttachment(): Promise<Uint8Array> {
@@ -27,15 +25,14 @@ async function main() {
   const out = join(process.cwd(), 'out', 'demo')
   rmSync(out, { recursive: true, force: true })
   mkdirSync(out, { recursive: true })
-  const withAttachment = peaucellierPackage({ state: 'in-check' })
+  const first = DEMO_CALCS[0]
+  const withAttachment = demoPackage(first, { state: 'in-check' })
   withAttachment.attachments = [{ name: 'Pin material certificate.pdf', bytes: await sampleAttachment() }]
   const jobs: [string, ReportPackage][] = [
-    ...DEMO_CALCS.map((c): [string, ReportPackage] => [`demo-${c.number}`, demoPackage(c, 'A4')]),
-    [`demo-${DEMO_CALCS[0].number}-letter`, demoPackage(DEMO_CALCS[0], 'LETTER')],
-    ['peaucellier-a4', peaucellierPackage({ paper: 'A4' })],
-    ['peaucellier-letter', peaucellierPackage({ paper: 'LETTER' })],
-    ['peaucellier-in-check-attachment', withAttachment],
-    ['hart-draft', hartPackage()],
+    ...DEMO_CALCS.map((c): [string, ReportPackage] => [`demo-${c.number}`, demoPackage(c)]),
+    [`demo-${first.number}-letter`, demoPackage(first, { paper: 'LETTER' })],
+    [`demo-${first.number}-draft`, demoPackage(first, { state: 'draft' })],
+    [`demo-${first.number}-in-check-attachment`, withAttachment],
   ]
   for (const [name, pkg] of jobs) {
     const t0 = performance.now()
@@ -45,7 +42,7 @@ async function main() {
     execFileSync('pdftoppm', ['-r', '60', '-png', file, join(out, name)])
     console.log(`${name}.pdf  ${(pdf.length / 1024).toFixed(0)} kB  ${Math.round(performance.now() - t0)} ms`)
   }
-  writeFileSync(join(out, 'peaucellier.html'), await renderWebDocument(peaucellierPackage()))
+  for (const c of DEMO_CALCS) writeFileSync(join(out, `demo-${c.number}.html`), await renderWebDocument(demoPackage(c)))
   console.log(`written to ${out}`)
 }
 

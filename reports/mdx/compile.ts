@@ -1,15 +1,16 @@
 /**
  * Compiles a calc type's MDX template once per rendering mode and keeps the
  * result: mdx-bundler runs esbuild, which costs far more than a render.
- * Templates are read at runtime from `<rootDir>/reports/templates/<type>.mdx`,
- * so the module still works after being bundled into a single file.
+ * Templates are read at runtime from `<rootDir>/reports/mechanisms/<id>/template.mdx`
+ * (reports/mechanisms), so the module still works after being bundled into a single file.
  */
 import { readFile } from 'node:fs/promises'
-import { join } from 'node:path'
 import { bundleMDX } from 'mdx-bundler'
 import remarkMath from 'remark-math'
 import rehypeKatex from 'rehype-katex'
-import type { CalcType, RenderOptions } from '../types'
+import type { MechanismId } from '../../lib/contract'
+import { templatePath } from '../mechanisms'
+import type { RenderOptions } from '../types'
 import { readMeta, type TemplateMeta } from '../model/context'
 import { type Outline, rehypeStripBlockWhitespace, remarkMathToJsx, remarkOutline, remarkTagEquations } from './plugins'
 
@@ -23,12 +24,8 @@ export interface CompiledTemplate {
 
 const cache = new Map<string, Promise<CompiledTemplate>>()
 
-export function templatesDir(opts: RenderOptions = {}): string {
-  return opts.templatesDir ?? join(opts.rootDir ?? process.cwd(), 'reports', 'templates')
-}
-
-export async function loadTemplate(type: CalcType, opts: RenderOptions = {}): Promise<string> {
-  return readFile(join(templatesDir(opts), `${type}.mdx`), 'utf8')
+export async function loadTemplate(type: MechanismId, opts: RenderOptions = {}): Promise<string> {
+  return readFile(templatePath(type, opts), 'utf8')
 }
 
 export function compileTemplate(source: string, mode: Mode): Promise<CompiledTemplate> {

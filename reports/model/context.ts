@@ -3,22 +3,21 @@
  * step numbers (identical in the web view and the PDF because both read them
  * from here), section order and the template's front matter.
  */
-import type { Step } from '../../lib/calc/types'
+import type { Step } from '../../lib/contract'
 import type { ReportPackage } from '../types'
 import { canonicalJson, sha256Hex } from '../hash'
 import type { Outline } from '../mdx/plugins'
-import { numberOutline, type Numbering } from './outline'
+import { stepSectionsOf } from '../../lib/mechanisms'
+import { numberOutline, stepOutline, type Numbering } from './outline'
 
 export interface TemplateReference {
   id: string
   text: string
 }
 
-/** The front matter a template declares. */
+/** The front matter a template declares (step order is the mechanism's, lib/mechanisms). */
 export interface TemplateMeta {
   title: string
-  /** Step sections in the order the template places them; numbering follows it. */
-  stepSections: string[]
   references: TemplateReference[]
 }
 
@@ -47,7 +46,6 @@ export function readMeta(frontmatter: Record<string, unknown>): TemplateMeta {
   const list = (v: unknown): unknown[] => (Array.isArray(v) ? v : [])
   return {
     title: typeof frontmatter.title === 'string' ? frontmatter.title : '',
-    stepSections: list(frontmatter.stepSections).map(String),
     references: list(frontmatter.references).flatMap((r) => {
       if (!r || typeof r !== 'object') return []
       const o = r as Record<string, unknown>
@@ -62,22 +60,18 @@ export function buildContext(
   outline: Outline,
   extra: { figureWidth: number; appendixPages?: number[] },
 ): ReportContext {
-  const grouped = new Map<string, Step[]>()
-  for (const step of pkg.result.steps) {
-    const list = grouped.get(step.section) ?? []
-    list.push(step)
-    grouped.set(step.section, list)
-  }
-  const placed = meta.stepSections.filter((s) => grouped.has(s))
-  const otherSections = [...grouped.keys()].filter((s) => !meta.stepSections.includes(s))
+  // One numbering for everything: the same function the app calls for remarks (stepOutline).
+  const byId = new Map(pkg.result.steps.map((s) => [s.id, s]))
   const bySection = new Map<string, NumberedStep[]>()
   const numberOf = new Map<string, number>()
-  let n = 0
-  for (const section of [...placed, ...otherSections]) {
-    const numbered = (grouped.get(section) ?? []).map((step) => ({ n: ++n, step }))
-    bySection.set(section, numbered)
-    for (const s of numbered) numberOf.set(s.step.id, s.n)
+  for (const entry of stepOutline(pkg)) {
+    const list = bySection.get(entry.section) ?? []
+    list.push({ n: entry.number, step: byId.get(entry.id)! })
+    bySection.set(entry.section, list)
+    numberOf.set(entry.id, entry.number)
   }
+  const declared = stepSectionsOf(pkg.calc.type)
+  const otherSections = [...bySection.keys()].filter((s) => !declared.includes(s))
   return { pkg, meta, bySection, otherSections, numberOf, figureWidth: extra.figureWidth, appendixPages: extra.appendixPages ?? [], resultHash: sha256Hex(canonicalJson(pkg.result)), numbering: numberOutline(outline, pkg.result) }
 }
 

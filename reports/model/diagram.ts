@@ -3,14 +3,14 @@
  * one scale, with the traced line, ground symbols and key dimensions.
  */
 import { scaleLinear } from 'd3-scale'
-import type { Point, PositionResult } from '../../lib/calc/types'
-import type { CalcResult } from '../types'
+import type { Point, PositionResult } from '../../lib/contract'
+import type { ReportResult } from '../types'
 import { formatNumber } from './format'
 import { ACCENT, GRID, INK, MUTED, type Scene, type SceneItem } from './scene'
 
 export type DiagramAt = 'start' | 'middle' | 'end'
 
-function groundNames(result: CalcResult): string[] {
+function groundNames(result: ReportResult): string[] {
   const g = result.groundJoints
   if (!g) return []
   return Array.isArray(g) ? g : Object.keys(g)
@@ -21,7 +21,7 @@ export function pickPositions(positions: PositionResult[], at: DiagramAt[]): Pos
   return at.map((a) => positions[idx[a]])
 }
 
-export function mechanismScene(result: CalcResult, at: DiagramAt[], width: number): Scene | null {
+export function mechanismScene(result: ReportResult, at: DiagramAt[], width: number): Scene | null {
   const positions = result.positions ?? []
   const links = result.links ?? []
   if (positions.length === 0 || links.length === 0) return null

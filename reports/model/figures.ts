@@ -1,4 +1,5 @@
 /** Figure scenes and captions, shared by both renderings. */
+import { reportPartsOf } from '../mechanisms'
 import type { ReportContext } from './context'
 import { mechanismScene, type DiagramAt } from './diagram'
 import { PLOT_TITLE, plotScene, type PlotKind } from './plots'
@@ -22,7 +23,8 @@ export function diagramFigure(ctx: ReportContext, at: string | undefined, captio
   const name = label(ctx, ordinal)
   if (!name) return null
   const picks = (at ?? 'start,middle,end').split(',').map((x) => x.trim()).filter((x): x is DiagramAt => x === 'start' || x === 'middle' || x === 'end')
-  const scene = mechanismScene(ctx.pkg.result, picks.length ? picks : ['middle'], ctx.figureWidth)
+  const draw = reportPartsOf(ctx.pkg.calc.type).diagram ?? mechanismScene
+  const scene = draw(ctx.pkg.result, picks.length ? picks : ['middle'], ctx.figureWidth)
   if (!scene) return null
   return { scene, label: name, caption: caption ?? 'The mechanism at the start, middle and end of the design stroke, drawn to scale. Dashed: the line the tracer should follow; blue: the tracer path over the solved positions.' }
 }

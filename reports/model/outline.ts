@@ -3,8 +3,10 @@
  * figures with nothing to show are dropped and the rest are numbered without
  * gaps. Both renderings read these numbers, so they always agree.
  */
+import type { Step } from '../../lib/contract'
+import { stepSectionsOf } from '../../lib/mechanisms'
 import type { Outline } from '../mdx/plugins'
-import type { CalcResult } from '../types'
+import type { ReportPackage, ReportResult } from '../types'
 
 export interface Numbering {
   section: (number | null)[]
@@ -12,21 +14,21 @@ export interface Numbering {
   backMatterStart: number
 }
 
-function has(result: CalcResult, stepSections: Set<string>, id: string, what: string): boolean {
+function has(result: ReportResult, stepSections: Set<string>, id: string, what: string): boolean {
   if (what === 'steps') return stepSections.has(id)
   if (what === 'positions') return (result.positions?.length ?? 0) > 0 || (result.loadCases?.length ?? 0) > 0
   if (what === 'checks') return (result.checks?.length ?? 0) > 0
   return true
 }
 
-function figureHas(result: CalcResult, component: string): boolean {
+function figureHas(result: ReportResult, component: string): boolean {
   if (component === 'Figure') return (result.positions?.length ?? 0) > 0 && (result.links?.length ?? 0) > 0
   if (component === 'Plot') return has(result, new Set(), '', 'positions')
   if (component === 'UtilisationChart') return (result.checks?.length ?? 0) > 0
   return true
 }
 
-export function numberOutline(outline: Outline, result: CalcResult): Numbering {
+export function numberOutline(outline: Outline, result: ReportResult): Numbering {
   const stepSections = new Set(result.steps.map((s) => s.section))
   let n = 0
   const section = outline.sections.map((s) => {
@@ -38,4 +40,33 @@ export function numberOutline(outline: Outline, result: CalcResult): Numbering {
     (fig.section < 0 || section[fig.section] !== null) && figureHas(result, fig.component) ? ++f : null,
   )
   return { section, figure, backMatterStart: n + 1 }
+}
+
+/** One step as the package numbers it. */
+export interface StepOutlineEntry {
+  id: string
+  /** The number printed beside the step in the web view and the PDF, 1-based. */
+  number: number
+  title: string
+  section: string
+}
+
+/**
+ * The package's step numbering, as data: steps are numbered section by section in the order the
+ * mechanism declares (registry `stepSections`), then any section the engine added in its own order;
+ * within a section in result order. Both renderings number from this, and anything else that shows
+ * step numbers (remarks beside the calc page, the API) can call it instead of reading rendered HTML.
+ * Pure: no template, no React.
+ */
+export function stepOutline(pkg: { calc: Pick<ReportPackage['calc'], 'type'>; result: { steps: readonly Step[] } }): StepOutlineEntry[] {
+  const grouped = new Map<string, Step[]>()
+  for (const step of pkg.result.steps) {
+    const list = grouped.get(step.section) ?? []
+    list.push(step)
+    grouped.set(step.section, list)
+  }
+  const declared = stepSectionsOf(pkg.calc.type)
+  const order = [...declared.filter((s) => grouped.has(s)), ...[...grouped.keys()].filter((s) => !declared.includes(s))]
+  let n = 0
+  return order.flatMap((section) => (grouped.get(section) ?? []).map((step) => ({ id: step.id, number: ++n, title: step.title, section })))
 }

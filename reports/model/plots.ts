@@ -4,8 +4,8 @@
  */
 import { scaleLinear } from 'd3-scale'
 import { line } from 'd3-shape'
-import type { CalcResult, LoadCasePositions } from '../types'
-import type { PositionResult } from '../../lib/calc/types'
+import type { ReportResult, LoadCasePositions } from '../types'
+import type { PositionResult } from '../../lib/contract'
 import { formatNumber } from './format'
 import { GRID, INK, MUTED, SERIES, type Scene, type SceneItem, textWidth } from './scene'
 
@@ -17,7 +17,7 @@ interface Series {
   dash?: string
 }
 
-function cases(result: CalcResult): LoadCasePositions[] {
+function cases(result: ReportResult): LoadCasePositions[] {
   if (result.loadCases && result.loadCases.length) return result.loadCases
   return result.positions?.length ? [{ name: 'Load case', positions: result.positions }] : []
 }
@@ -33,7 +33,7 @@ export const PLOT_TITLE: Record<PlotKind, string> = {
   torque: 'Drive torque over the stroke',
 }
 
-export function plotScene(result: CalcResult, kind: PlotKind, width: number): Scene | null {
+export function plotScene(result: ReportResult, kind: PlotKind, width: number): Scene | null {
   const lcs = cases(result)
   if (lcs.length === 0) return null
   if (kind === 'torque') {

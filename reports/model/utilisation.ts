@@ -1,6 +1,6 @@
 /** Horizontal bars, one per check, in document order, with the limit u = 1 marked. */
 import { scaleLinear } from 'd3-scale'
-import type { CheckItem } from '../../lib/calc/types'
+import type { CheckItem } from '../../lib/contract'
 import { formatUtilisation } from './format'
 import { FAIL, GRID, INK, MUTED, PASS, WARN, type Scene, type SceneItem, textWidth } from './scene'
 

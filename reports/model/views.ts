@@ -3,7 +3,8 @@
  * same strings, so they can only differ in layout, never in content.
  */
 import { GENERAL_CAUTION } from '../../lib/cautions'
-import type { CheckItem, Step, Table } from '../../lib/calc/types'
+import { mechanismLabel } from '../../lib/mechanisms'
+import type { CheckItem, Step, Table } from '../../lib/contract'
 import type { ReportPackage } from '../types'
 import type { ReportContext } from './context'
 import { STATE_LABEL, VERDICT_LABEL, formatDate, formatNumber, formatUtilisation, formatValue } from './format'
@@ -186,7 +187,7 @@ export function titleView(pkg: ReportPackage, resultHash: string): TitleView {
     rows: [
       ['Project', `${pkg.project.code} — ${pkg.project.name}`],
       ['Client', pkg.project.client],
-      ['Calculation', `${pkg.calc.number} (${pkg.calc.type === 'hart' ? "Hart's inversor" : 'Peaucellier–Lipkin cell'})`],
+      ['Calculation', `${pkg.calc.number} (${mechanismLabel(pkg.calc.type)})`],
       ['Revision', `${pkg.revision.label} — ${STATE_LABEL[pkg.revision.state]}`],
       ['Generated', `${formatDate(pkg.generatedAt)} · engine ${pkg.engineVersion} · template ${pkg.templateVersion}`],
       ['Result SHA-256', resultHash],

@@ -3,38 +3,24 @@
  * (runMechanism), the sweep alone (positions and statics) and the positions
  * alone (closed-form placement, no statics), so a change can be placed.
  */
-import { runMechanism, type MechanismInput } from '@/lib/calc/mechanism'
-import { hartCell, peaucellierCell, type InversorCell } from '@/lib/linkage'
+import { mechanismInputSchema, runMechanism, type MechanismInput } from '@/lib/calc/mechanism'
 import { placeAt } from '@/lib/linkage/crank'
+import { getMechanism } from '@/lib/mechanisms'
 import { runSweep } from '@/lib/linkage/sweep'
 import { DEG } from '@/lib/linkage/vec'
 
-interface Case {
-  input: MechanismInput
-  cell: InversorCell
-  crank: number
-}
-
-const CASES: Case[] = [
+const CASES: MechanismInput[] = [
   {
-    input: {
-      mechanism: 'peaucellier',
-      geometry: { arm: 200, side: 90, crank: 70 },
-      loads: [{ name: 'push', fx: 0, fy: 150 }],
-      sweep: { fromDeg: -60, toDeg: 60, count: 1000 },
-    },
-    cell: peaucellierCell({ arm: 200, side: 90 }),
-    crank: 70,
+    mechanism: 'peaucellier',
+    geometry: { arm: 200, side: 90, crank: 70 },
+    loads: [{ name: 'push', fx: 0, fy: 150 }],
+    sweep: { fromDeg: -60, toDeg: 60, count: 1000 },
   },
   {
-    input: {
-      mechanism: 'hart',
-      geometry: { long: 240, short: 100, ratio: 0.4, crank: 40 },
-      loads: [{ name: 'push', fx: 0, fy: 150 }],
-      sweep: { fromDeg: -40, toDeg: 40, count: 1000 },
-    },
-    cell: hartCell({ long: 240, short: 100, ratio: 0.4 }),
-    crank: 40,
+    mechanism: 'hart',
+    geometry: { long: 240, short: 100, ratio: 0.4, crank: 40 },
+    loads: [{ name: 'push', fx: 0, fy: 150 }],
+    sweep: { fromDeg: -40, toDeg: 40, count: 1000 },
   },
 ]
 
@@ -64,13 +50,14 @@ function measure(fn: () => unknown): string {
 }
 
 export default function bench(): void {
-  for (const { input, cell, crank } of CASES) {
+  for (const input of CASES) {
+    const { cell, crank, offset } = getMechanism(input.mechanism).model(mechanismInputSchema.parse(input).geometry)
     const sweep = input.sweep!
     const anglesDeg = Array.from({ length: sweep.count }, (_, i) => sweep.fromDeg + ((sweep.toDeg - sweep.fromDeg) * i) / (sweep.count - 1))
     const positions = runMechanism(input).positions.length
     console.log(`${input.mechanism}: ${positions} positions`)
     console.log(`  whole calc, with statics, checks, steps, tables  median ${measure(() => runMechanism(input))}`)
-    console.log(`  sweep: positions and statics                     median ${measure(() => runSweep({ cell, crank, offset: crank, anglesDeg, loads: input.loads, weightPerMm: null, amplificationLimit: 100 }))}`)
-    console.log(`  positions only, no statics                       median ${measure(() => anglesDeg.map((a) => placeAt(cell, crank, crank, a * DEG)))}`)
+    console.log(`  sweep: positions and statics                     median ${measure(() => runSweep({ cell, crank, offset, anglesDeg, loads: input.loads, weightPerMm: null, amplificationLimit: 100 }))}`)
+    console.log(`  positions only, no statics                       median ${measure(() => anglesDeg.map((a) => placeAt(cell, offset, crank, a * DEG)))}`)
   }
 }

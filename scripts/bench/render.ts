@@ -1,6 +1,6 @@
 /**
  * Report rendering speed for the real demo calcs (seed inputs run through the engine and
- * checks) and the hand-made fixture: PDF cold (first render in a fresh process) and warm
+ * checks): PDF cold (first render in a fresh process) and warm
  * (median), CPU time, pages, bytes, web HTML time, and as a yardstick the same HTML printed
  * to PDF by headless Chromium. Each package runs in its own process so "cold" is honest.
  * Run alone (the machine is shared): `NODE_ENV=production tsx scripts/bench/render.ts [name…]`.
@@ -14,7 +14,7 @@ import type { ReportPackage } from '../../reports/types'
 
 const WARM_RUNS = 5
 const CHROMIUM = '/usr/bin/chromium'
-const NAMES = ['LC-001', 'LC-002', 'LC-003', 'fixture']
+const NAMES = ['LC-001', 'LC-002', 'LC-003']
 
 function median(xs: number[]): number {
   const s = [...xs].sort((a, b) => a - b)
@@ -32,8 +32,7 @@ async function timed<T>(fn: () => Promise<T>): Promise<{ ms: number; cpuMs: numb
 const fmt = (ms: number) => `${Math.round(ms)} ms`
 
 async function packageNamed(name: string): Promise<ReportPackage> {
-  if (name === 'fixture') return (await import('../../tests/reports/fixtures/peaucellier')).peaucellierPackage()
-  const { demoPackage, demoCalc } = await import('../../tests/reports/fixtures/demo')
+  const { demoPackage, demoCalc } = await import('../../reports/demo')
   return demoPackage(demoCalc(name))
 }
 

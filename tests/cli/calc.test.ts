@@ -3,7 +3,7 @@ import { mkdtempSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import path from 'node:path'
 import { describe, expect, it } from 'vitest'
-import { DEMO_CALCS } from '@/server/demo/demo-data'
+import { DEMO_CALCS } from '@/lib/demo/calcs'
 
 const dir = mkdtempSync(path.join(tmpdir(), 'inverso-cli-'))
 function calc(input: unknown) {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { formatValue, renderPdf } from '@/reports/index'
-import { demoCalc, demoPackage } from './fixtures/demo'
+import { demoCalc, demoPackage } from '@/reports/demo'
 import { pageCount, pdfText, squash } from './helpers'
 
 /**

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { PDFDocument, StandardFonts } from 'pdf-lib'
-import { CAUTION_BASE, formatValue, renderPdf, sha256Hex } from '@/reports/index'
+import { CAUTION_BASE, formatValue, renderPdf, sha256Hex, watermarkFor } from '@/reports/index'
 import { peaucellierPackage } from './fixtures/peaucellier'
 import { hartPackage } from './fixtures/hart'
 import { pageCount, pdfRawText, pdfText, squash } from './helpers'
@@ -36,10 +36,15 @@ describe('renderPdf', () => {
     expect(sha256Hex(a)).toBe(sha256Hex(b))
   }, SLOW)
 
-  it('watermarks draft, in-check and superseded revisions', async () => {
-    expect(pdfRawText(await renderPdf(peaucellierPackage({ state: 'draft' })))).toContain('DRAFT')
-    expect(pdfRawText(await renderPdf(peaucellierPackage({ state: 'in-check' })))).toContain('DRAFT')
-    expect(pdfRawText(await renderPdf(peaucellierPackage({ state: 'superseded' })))).toContain('SUPERSEDED')
+  it('watermarks every state the workflow marks, and leaves an issued revision clean', async () => {
+    for (const state of ['draft', 'in-check', 'superseded'] as const) {
+      const mark = watermarkFor(state)
+      expect(mark, state).toBeTruthy()
+      expect(pdfRawText(await renderPdf(peaucellierPackage({ state })))).toContain(squash(mark!))
+    }
+    expect(watermarkFor('issued')).toBeNull()
+    const issued = pdfRawText(await renderPdf(peaucellierPackage({ state: 'issued' })))
+    for (const state of ['draft', 'in-check', 'superseded'] as const) expect(issued).not.toContain(squash(watermarkFor(state)!))
   }, SLOW)
 
   it('appends attached PDFs as stamped appendix pages', async () => {
