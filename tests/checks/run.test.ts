@@ -1,6 +1,6 @@
 /** runChecks over engine envelopes: design-force selection, governing flags, ids, table, cautions. */
 import { describe, expect, it } from 'vitest'
-import type { LoadCaseEnvelope } from '@/lib/calc/types'
+import type { LoadCaseEnvelope } from '@/lib/contract'
 import { ChecksInputError, checksInputSchema, GENERAL_CAUTION, runChecks, runChecksCli } from '@/lib/checks'
 import allowable from '@/examples/checks-allowable.json'
 import en from '@/examples/checks-en1993.json'

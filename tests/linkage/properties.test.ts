@@ -6,7 +6,7 @@ import { linkageOf } from '@/lib/linkage/crank'
 import { peaucellierCell } from '@/lib/linkage/cells/peaucellier'
 import { hartCell } from '@/lib/linkage/cells/hart'
 import { linkLengthError } from '@/lib/linkage/kinematic-checks'
-import type { MechanismResult } from '@/lib/calc/types'
+import type { MechanismResult } from '@/lib/contract'
 
 /** Every number anywhere in the result, so a NaN or Infinity cannot hide in a nested key. */
 function numbers(x: unknown, out: number[] = []): number[] {
