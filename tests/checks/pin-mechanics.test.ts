@@ -72,6 +72,10 @@ describe('governing plate', () => {
     const w = worstPlate(j, 1000, (p, F) => ({ result: 0, demand: F, capacity: p.role === 'outer plate' ? 0 : 1e9 }))
     expect(w.plate.role).toBe('outer plate')
     expect(w.utilisation).toBe(Number.POSITIVE_INFINITY)
+    // even with no force on it (0/0 would be NaN and never govern)
+    const z = worstPlate(j, 0, (p, F) => ({ result: 0, demand: F, capacity: p.role === 'outer plate' ? 0 : 1e9 }))
+    expect(z.plate.role).toBe('outer plate')
+    expect(z.utilisation).toBe(Number.POSITIVE_INFINITY)
   })
   it('a joint without plates is an internal error', () => {
     expect(() => worstPlate(joint('double', [], 0), 1000, rule)).toThrow('joint J has no plates')
@@ -95,5 +99,7 @@ describe('plate label', () => {
     expect(plateLabel(joint('double', [], 0), plate('outer plate', 4, 355, 0.5))).toBe('outer plate (each of two), t = 4 mm, S355, test band')
     expect(plateLabel(joint('double', [], 0), plate('middle plate', 10, 355, 1))).toBe('middle plate, t = 10 mm, S355, test band')
     expect(plateLabel(joint('single', [], 0), plate('plate 2', 4, 355, 1))).toBe('plate 2, t = 4 mm, S355, test band')
+    // "each of two" belongs to the fork's outer plates only, whatever share a lap plate is given
+    expect(plateLabel(joint('single', [], 0), plate('plate 2', 4, 355, 0.5))).toBe('plate 2, t = 4 mm, S355, test band')
   })
 })
