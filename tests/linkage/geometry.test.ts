@@ -3,6 +3,7 @@ import { peaucellierCell } from '@/lib/linkage/cells/peaucellier'
 import { hartCell } from '@/lib/linkage/cells/hart'
 import { inRing, sqrt0 } from '@/lib/linkage/cells/cell'
 import { assessGeometry, isStraight, tracerPath } from '@/lib/linkage/geometry'
+import { runSweep } from '@/lib/linkage/sweep'
 import { printedNumbers } from '../checks/_hand'
 
 /*
@@ -199,5 +200,30 @@ describe('closed forms printed as worked', () => {
       ['AT', 'AT', [0, 60], 'bar'],
       ['BT', 'BT', [0, 60], 'bar'],
     ])
+  })
+})
+
+describe('cell descriptions', () => {
+  it('name their mechanism and their sources', () => {
+    expect(peau.mechanism).toBe('peaucellier')
+    expect(hart.mechanism).toBe('hart')
+    for (const c of [peau, hart]) {
+      expect(c.source).toMatch(/Coxeter, Introduction to Geometry, §6\.1/)
+      expect(c.source).toMatch(/Kempe, How to Draw a Straight Line, 1877/)
+    }
+  })
+  it('watch the angles that close at the toggles: near the crank limit the least one goes to 0°', () => {
+    // Peaucellier e = r = 60: at the limit the rhombus lies flat (A, O, P in line);
+    // Hart e = r = 40: at the limit the antiparallelogram lies flat.
+    for (const [cell, r, limDeg] of [
+      [peau, 60, (2 * Math.acos(0.75)) / DEG],
+      [hart, 40, (2 * Math.acos(0.7)) / DEG],
+    ] as const) {
+      const out = runSweep({ cell, crank: r, offset: r, anglesDeg: [0, limDeg - 0.001], loads: [{ name: 'y', fx: 0, fy: 1 }], weightPerMm: null, amplificationLimit: 1e9 })
+      const [mid, edge] = out.cases[0].samples.map((s) => s.position.transmissionAngleDeg)
+      expect(mid).toBeGreaterThan(10)
+      expect(edge).toBeLessThan(0.5)
+      expect(Object.keys(out.cases[0].samples[0].position.transmissionAngles).sort()).toEqual(cell === peau ? ['A', 'B', 'T'] : ['A', 'B', 'D', 'E'])
+    }
   })
 })
