@@ -42,7 +42,8 @@ export interface HistoryEntry {
 }
 
 export interface Remark {
-  stepId: string
+  /** The step the remark is about; null for a remark on the package as a whole. */
+  stepId: string | null
   author: string
   role: string
   text: string

@@ -1,7 +1,7 @@
 import { z } from 'zod'
 import { analyse } from '@/lib/linkage'
 import type { MechanismResult } from '@/lib/contract'
-import { findMechanism, getMechanism, mechanismChoiceMessage, nonNegative, num, positive, type BuiltInMechanismInput, type Geometry } from '@/lib/mechanisms'
+import { findMechanism, getMechanism, mechanismChoiceMessage, mechanisms, nonNegative, num, positive, type BuiltInMechanismInput, type Geometry } from '@/lib/mechanisms'
 import { ENGINE_VERSION } from './version'
 
 /*
@@ -76,6 +76,15 @@ export const mechanismInputSchema = mechanismCommonSchema
 /** The input of any registered mechanism, as the schema reads it (geometry unchecked by the type). */
 export type AnyMechanismInput = z.input<typeof mechanismInputSchema>
 /** A typed input of a built-in mechanism: what code that builds inputs (tests, benches) writes. */
+/**
+ * The same input as a discriminated union over the mechanisms registered now, each with its own
+ * geometry schema: for documentation (OpenAPI). Parsing goes through `mechanismInputSchema`.
+ */
+export function mechanismInputUnionSchema() {
+  const options = mechanisms().map((m) => mechanismCommonSchema.extend({ mechanism: z.literal(m.id), geometry: m.geometry }))
+  return z.discriminatedUnion('mechanism', options as [(typeof options)[number], ...(typeof options)[number][]])
+}
+
 export type MechanismInput = Omit<AnyMechanismInput, 'mechanism' | 'geometry'> & BuiltInMechanismInput
 export type ParsedMechanismInput = z.output<typeof mechanismInputSchema>
 

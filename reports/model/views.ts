@@ -117,7 +117,7 @@ export function remarksTable(pkg: ReportPackage, ctx: ReportContext): TableView 
     headers: ['Step', 'Date', 'By', 'Remark', 'Status'],
     numeric: [false, false, false, false, false],
     rows: pkg.remarks.map((r) => [
-      `${ctx.numberOf.get(r.stepId) ?? '—'} · ${r.stepId}`,
+      r.stepId ? `${ctx.numberOf.get(r.stepId) ?? '—'} · ${r.stepId}` : 'general',
       formatDate(r.date),
       `${r.author} (${r.role})`,
       r.text,
