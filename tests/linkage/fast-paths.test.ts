@@ -33,15 +33,17 @@ function positions(cell: InversorCell, r: number, e: number, from: number, to: n
   return out
 }
 
-const CELLS: [string, InversorCell, number, number][] = [
-  ['Peaucellier', peaucellierCell({ arm: 150, side: 60 }), 60, 60],
-  ['Peaucellier, arc', peaucellierCell({ arm: 150, side: 60 }), 60, 52],
-  ['Hart', hartCell({ long: 240, short: 100, ratio: 0.4 }), 40, 40],
+// Cells are built inside each test (not while collecting), so mutation testing sees which tests cover them.
+const CELLS: [string, () => InversorCell, number, number][] = [
+  ['Peaucellier', () => peaucellierCell({ arm: 150, side: 60 }), 60, 60],
+  ['Peaucellier, arc', () => peaucellierCell({ arm: 150, side: 60 }), 60, 52],
+  ['Hart', () => hartCell({ long: 240, short: 100, ratio: 0.4 }), 40, 40],
 ]
 
 describe('statics with a reused workspace', () => {
-  for (const [name, cell, r, e] of CELLS) {
+  for (const [name, newCell, r, e] of CELLS) {
     it(`${name}: equals a fresh solve at every position, including the symmetric one`, () => {
+      const cell = newCell()
       const model = buildModel(linkageOf(cell, e, r))
       const ws = staticsWorkspace(model, LOADS.length)
       const pts = new Float64Array(2 * model.pointCount)
@@ -63,7 +65,8 @@ describe('statics with a reused workspace', () => {
   }
 
   it('solveInPlace with the equilibrium pattern equals the full scan', () => {
-    const [, cell, r, e] = CELLS[2]
+    const [, newCell, r, e] = CELLS[2]
+    const cell = newCell()
     const model = buildModel(linkageOf(cell, e, r))
     const n = model.size
     const scratch = solveScratch(n, equilibriumPattern(model))

@@ -21,11 +21,15 @@ import { runMechanism } from '@/lib/calc/mechanism'
  * Ground: O gets 2·N_OA·(−0.8, ·) = (−457.14, 0), C gets (357.14, 0); with F: 100 − 457.14 + 357.14 = 0.
  */
 describe('Peaucellier–Lipkin cell, hand-solved joint equilibrium at the symmetric position', () => {
-  const cell = peaucellierCell({ arm: 100, side: 75 })
-  const out = runSweep({ cell, crank: 17.5, offset: 17.5, anglesDeg: [0], loads: [{ name: 'x', fx: 100, fy: 0 }], weightPerMm: null, amplificationLimit: 100 })
-  const p = out.cases[0].samples[0].position
+  // Solved inside each test (not while collecting), so mutation testing sees which tests cover the engine.
+  const solved = () => {
+    const cell = peaucellierCell({ arm: 100, side: 75 })
+    const out = runSweep({ cell, crank: 17.5, offset: 17.5, anglesDeg: [0], loads: [{ name: 'x', fx: 100, fy: 0 }], weightPerMm: null, amplificationLimit: 100 })
+    return out.cases[0].samples[0].position
+  }
 
   it('places the joints as worked out by hand', () => {
+    const p = solved()
     expect(p.joints.A.x).toBeCloseTo(80, 10)
     expect(p.joints.A.y).toBeCloseTo(60, 10)
     expect(p.joints.B.y).toBeCloseTo(-60, 10)
@@ -33,6 +37,7 @@ describe('Peaucellier–Lipkin cell, hand-solved joint equilibrium at the symmet
   })
 
   it('gives the hand-solved axial forces, tension positive', () => {
+    const p = solved()
     expect(p.linkForces.AT).toBeCloseTo(250 / 3, 8)
     expect(p.linkForces.BT).toBeCloseTo(250 / 3, 8)
     expect(p.linkForces.AP).toBeCloseTo(-6250 / 21, 8)
@@ -42,6 +47,7 @@ describe('Peaucellier–Lipkin cell, hand-solved joint equilibrium at the symmet
   })
 
   it('gives the hand-solved reactions and pin forces', () => {
+    const p = solved()
     expect(p.reactions.O.x).toBeCloseTo(-3200 / 7, 8)
     expect(p.reactions.O.y).toBeCloseTo(0, 8)
     expect(p.reactions.C.x).toBeCloseTo(2500 / 7, 8)
@@ -55,9 +61,10 @@ describe('Peaucellier–Lipkin cell against the geometry of inversion', () => {
   // centre of inversion onto a line at distance k/(2r) (diameter 2r), and any
   // other circle onto a circle; Kempe (How to Draw a Straight Line, 1877) gives
   // the cell's |OP|·|OT| = l² − s².
-  const cell = peaucellierCell({ arm: 150, side: 60 })
+  const newCell = () => peaucellierCell({ arm: 150, side: 60 })
 
   it('keeps |OP|·|OT| = l² − s² and the tracer on x = k/(2r)', () => {
+    const cell = newCell()
     const out = runSweep({ cell, crank: 60, offset: 60, anglesDeg: [-70, -35, 0, 20, 77], loads: [{ name: 'y', fx: 0, fy: 10 }], weightPerMm: null, amplificationLimit: 100 })
     for (const { position: p } of out.cases[0].samples) {
       expect(Math.hypot(p.joints.P.x, p.joints.P.y) * Math.hypot(p.tracer.x, p.tracer.y)).toBeCloseTo(150 ** 2 - 60 ** 2, 8)
@@ -66,6 +73,7 @@ describe('Peaucellier–Lipkin cell against the geometry of inversion', () => {
   })
 
   it('drives the tracer as T_y = (k/2r)·tan(θ/2), so by virtual work τ = −F_y·(k/4r)·sec²(θ/2)', () => {
+    const cell = newCell()
     // Inscribed angle: with the crank circle through O, the ray O→P makes θ/2 with +x.
     const out = runSweep({ cell, crank: 60, offset: 60, anglesDeg: [-60, -10, 25, 70], loads: [{ name: 'y', fx: 0, fy: 50 }], weightPerMm: null, amplificationLimit: 100 })
     for (const { position: p } of out.cases[0].samples) {
@@ -76,6 +84,7 @@ describe('Peaucellier–Lipkin cell against the geometry of inversion', () => {
   })
 
   it('follows the circle of centre ke/(e² − r²), radius kr/|e² − r²| when e ≠ r', () => {
+    const cell = newCell()
     const e = 50
     const r = 60
     const path = tracerPath(cell.k, e, r)
