@@ -1,7 +1,7 @@
 import { sql } from 'drizzle-orm'
 import { index, integer, primaryKey, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core'
 import type { ProjectRole } from '@/lib/review/roles'
-import type { RevisionState } from '@/lib/review/workflow'
+import type { RemarkSeverity, RevisionState } from '@/lib/review/workflow'
 
 const id = () => text('id').primaryKey()
 const createdAt = () =>
@@ -125,9 +125,43 @@ export const revisions = sqliteTable(
     checkedAt: integer('checked_at', { mode: 'timestamp_ms' }),
     approvedAt: integer('approved_at', { mode: 'timestamp_ms' }),
     issuedAt: integer('issued_at', { mode: 'timestamp_ms' }),
+    /** Why this revision was made, given at submission; shown in the revision history. */
+    reason: text('reason'),
+    /** Submitted although a check failed, after the engineer confirmed it. */
+    submittedFailing: integer('submitted_failing', { mode: 'boolean' }).notNull().default(false),
+    /** The checker and approver the engineer named at submission; only they may sign. */
+    assignedCheckerId: text('assigned_checker_id').references(() => users.id),
+    assignedApproverId: text('assigned_approver_id').references(() => users.id),
+    /** Short code printed on the issued package; the public verification page takes it. */
+    verificationCode: text('verification_code').unique(),
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex('revisions_calc_label').on(t.calcId, t.label)],
+)
+
+/**
+ * Every transition of a revision with who, when and why; for signing transitions the Ed25519
+ * signature of the server's key over the signed statement (canonical JSON, kept as text).
+ */
+export const revisionEvents = sqliteTable(
+  'revision_events',
+  {
+    id: integer('id').primaryKey({ autoIncrement: true }),
+    revisionId: text('revision_id')
+      .notNull()
+      .references(() => revisions.id),
+    action: text('action').notNull(),
+    fromState: text('from_state').$type<RevisionState>(),
+    toState: text('to_state').$type<RevisionState>().notNull(),
+    userId: text('user_id')
+      .notNull()
+      .references(() => users.id),
+    reason: text('reason'),
+    statement: text('statement'),
+    signature: text('signature'),
+    at: integer('at', { mode: 'timestamp_ms' }).notNull(),
+  },
+  (t) => [index('revision_events_revision').on(t.revisionId, t.at)],
 )
 
 export const checkRemarks = sqliteTable('check_remarks', {
@@ -135,16 +169,91 @@ export const checkRemarks = sqliteTable('check_remarks', {
   revisionId: text('revision_id')
     .notNull()
     .references(() => revisions.id, { onDelete: 'cascade' }),
-  /** The result step the remark is about; stable across revisions. */
-  stepId: text('step_id').notNull(),
+  /** The step (or table or figure) the remark is about, stable across revisions; null for the whole calc. */
+  stepId: text('step_id'),
+  severity: text('severity').$type<RemarkSeverity>().notNull().default('must-resolve'),
+  /** The remark on an earlier revision this one continues (open remarks follow the step to the next revision). */
+  carriedFromId: text('carried_from_id'),
   authorId: text('author_id')
     .notNull()
     .references(() => users.id),
   text: text('text').notNull(),
   status: text('status', { enum: ['open', 'answered', 'closed'] }).notNull().default('open'),
   response: text('response'),
+  closedBy: text('closed_by').references(() => users.id),
+  closedAt: integer('closed_at', { mode: 'timestamp_ms' }),
   createdAt: createdAt(),
 })
+
+/** A remark's thread: replies are added, never overwritten. */
+export const remarkReplies = sqliteTable(
+  'remark_replies',
+  {
+    id: id(),
+    remarkId: text('remark_id')
+      .notNull()
+      .references(() => checkRemarks.id, { onDelete: 'cascade' }),
+    authorId: text('author_id')
+      .notNull()
+      .references(() => users.id),
+    text: text('text').notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [index('remark_replies_remark').on(t.remarkId)],
+)
+
+/** The checker's tick against a step: verified, by whom and when. */
+export const stepTicks = sqliteTable(
+  'step_ticks',
+  {
+    revisionId: text('revision_id')
+      .notNull()
+      .references(() => revisions.id),
+    stepId: text('step_id').notNull(),
+    userId: text('user_id')
+      .notNull()
+      .references(() => users.id),
+    at: integer('at', { mode: 'timestamp_ms' }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.revisionId, t.stepId] })],
+)
+
+/** The approver's confirmation, before issue, of a material value the library marks "from memory". */
+export const materialConfirmations = sqliteTable(
+  'material_confirmations',
+  {
+    revisionId: text('revision_id')
+      .notNull()
+      .references(() => revisions.id),
+    /** e.g. `S355.fy` */
+    value: text('value').notNull(),
+    userId: text('user_id')
+      .notNull()
+      .references(() => users.id),
+    at: integer('at', { mode: 'timestamp_ms' }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.revisionId, t.value] })],
+)
+
+/** In-app notices: what someone must act on next, with a link to the page to act on. */
+export const notices = sqliteTable(
+  'notices',
+  {
+    id: id(),
+    userId: text('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    projectId: text('project_id').references(() => projects.id, { onDelete: 'cascade' }),
+    calcId: text('calc_id'),
+    revisionId: text('revision_id'),
+    kind: text('kind').notNull(),
+    text: text('text').notNull(),
+    link: text('link').notNull(),
+    readAt: integer('read_at', { mode: 'timestamp_ms' }),
+    createdAt: createdAt(),
+  },
+  (t) => [index('notices_user').on(t.userId, t.createdAt)],
+)
 
 export const attachments = sqliteTable('attachments', {
   id: id(),
@@ -211,9 +320,68 @@ export const apiTokens = sqliteTable(
   (t) => [index('api_tokens_user').on(t.userId)],
 )
 
+/**
+ * Mail waiting to be sent (server/mail/outbox.ts). A row is written in the same transaction as
+ * whatever the mail tells about; the sender claims due rows one at a time (`claimed_by` /
+ * `claimed_until`), so with several app instances on one database each mail goes out once.
+ * A mail that failed `MAX_ATTEMPTS` times keeps its row with `failed_at` and the last error.
+ */
+export const outbox = sqliteTable(
+  'outbox',
+  {
+    id: integer('id').primaryKey({ autoIncrement: true }),
+    to: text('to').notNull(),
+    subject: text('subject').notNull(),
+    text: text('text').notNull(),
+    html: text('html'),
+    attempts: integer('attempts').notNull().default(0),
+    /** When the sender may next try (now for a new row; later after a failure, with back-off). */
+    nextAttemptAt: integer('next_attempt_at', { mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),
+    claimedBy: text('claimed_by'),
+    claimedUntil: integer('claimed_until', { mode: 'timestamp_ms' }),
+    sentAt: integer('sent_at', { mode: 'timestamp_ms' }),
+    /** Set when the sender gave up; the row stays for the admin to see. */
+    failedAt: integer('failed_at', { mode: 'timestamp_ms' }),
+    lastError: text('last_error'),
+    createdAt: createdAt(),
+  },
+  (t) => [index('outbox_due').on(t.sentAt, t.failedAt, t.nextAttemptAt)],
+)
+
+/**
+ * Counters of the sign-in and password-reset limits (server/auth/throttle.ts), one row per key
+ * (account + source, source, account, …): attempts since the last quiet hour and the time of the last.
+ */
+export const authThrottle = sqliteTable('auth_throttle', {
+  key: text('key').primaryKey(),
+  count: integer('count').notNull().default(0),
+  lastAt: integer('last_at', { mode: 'timestamp_ms' }).notNull(),
+})
+
+/**
+ * Browsers that signed in to an account before (a long-lived cookie, only its hash stored). They
+ * are exempt from the account-wide sign-in limit, so an attack spread over many addresses slows
+ * strangers but never locks the owner out of their own browser.
+ */
+export const signInDevices = sqliteTable(
+  'sign_in_devices',
+  {
+    tokenHash: text('token_hash').primaryKey(),
+    userId: text('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    createdAt: createdAt(),
+    lastUsedAt: integer('last_used_at', { mode: 'timestamp_ms' }),
+  },
+  (t) => [index('sign_in_devices_user').on(t.userId)],
+)
+
 export type User = typeof users.$inferSelect
 export type Project = typeof projects.$inferSelect
 export type Calc = typeof calcs.$inferSelect
 export type Revision = typeof revisions.$inferSelect
 export type CheckRemark = typeof checkRemarks.$inferSelect
+export type RevisionEvent = typeof revisionEvents.$inferSelect
+export type Notice = typeof notices.$inferSelect
 export type ApiToken = typeof apiTokens.$inferSelect
+export type OutboxRow = typeof outbox.$inferSelect

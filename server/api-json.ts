@@ -33,5 +33,16 @@ export async function revisionJson(r: Revision): Promise<z.infer<typeof revision
 }
 
 export function remarkJson(r: RemarkRow): z.infer<typeof remarkOut> {
-  return { ...r, createdAt: r.createdAt.toISOString() }
+  return {
+    id: r.id,
+    stepId: r.stepId,
+    severity: r.severity,
+    text: r.text,
+    status: r.status,
+    author: r.author,
+    createdAt: r.createdAt.toISOString(),
+    closedAt: r.closedAt?.toISOString() ?? null,
+    carriedFromId: r.carriedFromId,
+    replies: r.replies.map((x) => ({ ...x, createdAt: x.createdAt.toISOString() })),
+  }
 }

@@ -1,14 +1,16 @@
 import { eq } from 'drizzle-orm'
 import { db } from '@/db'
-import { listRevisions } from '@/db/queries'
+import { listMembers, listRevisions } from '@/db/queries'
 import { calcs, type Calc } from '@/db/schema'
-import { calculate } from '@/lib/calc/run'
+import { calculate, type CalcResult } from '@/lib/calc/run'
+import { memoryValuesIn } from '@/lib/checks/memory-values'
 import { AppError } from '@/lib/errors'
 import { authoriseCalc, type Caller } from './access'
 import { pendingAttachments } from './attachments'
 import { listMaterials } from './materials'
-import { listRemarks } from './remarks'
+import { openRemarks, remarksWithThreads } from './remarks'
 import { draftReportPackage, loadReportPackage } from './report-package'
+import { ticksOf } from './ticks'
 
 /** Calcs saved before the working result was stored with the inputs get it on first view, once. */
 async function withWorkingResult(calc: Calc): Promise<Calc> {
@@ -20,21 +22,46 @@ async function withWorkingResult(calc: Calc): Promise<Calc> {
 }
 
 /**
- * Everything the calc page shows: the calc, its revisions, the package of the revision asked for
- * (`view` = a revision id, or 'working' for the working inputs; by default the newest revision),
- * its remarks, pending appendices and the project's materials.
+ * Everything the calc page shows: the calc, its revisions (with what blocks each), the package of
+ * the revision asked for (`view` = a revision id, or 'working' for the working inputs; by default
+ * the newest revision), its remarks with threads and its ticks, pending appendices, the project's
+ * materials and the people who can be named checker and approver.
  */
 export async function getCalcWorkspace(caller: Caller | null, projectId: string, calcId: string, view?: string) {
   const access = await authoriseCalc(caller, projectId, calcId, 'project.view')
   const calc = await withWorkingResult(access.calc)
-  const revisions = await listRevisions(calcId)
+  const [revisions, members] = await Promise.all([listRevisions(calcId), listMembers(projectId)])
   if (view && view !== 'working' && !revisions.some((r) => r.id === view)) throw new AppError('not_found', 'No such revision.')
   const shown = view === 'working' || revisions.length === 0 ? null : (revisions.find((r) => r.id === view) ?? revisions[0])
-  const [pkg, remarks, pending, materials] = await Promise.all([
+  const [pkg, remarks, ticks, pending, materials, blockers] = await Promise.all([
     shown ? loadReportPackage(shown.id) : draftReportPackage(access.project, calc),
-    shown ? listRemarks(caller, projectId, calcId, shown.id) : [],
+    shown ? remarksWithThreads(shown.id) : [],
+    shown ? ticksOf(shown.id) : [],
     pendingAttachments(caller, projectId, calcId),
     listMaterials(caller, projectId),
+    Promise.all(revisions.map((r) => openRemarks(r.id))),
   ])
-  return { ...access, calc, revisions, shown, pkg, remarks, pending, materials }
+  const name = (id: string | null) => (id ? (members.find((m) => m.userId === id)?.name ?? '—') : null)
+  const people = (role: string) => members.filter((m) => m.role === role && m.active).map((m) => ({ id: m.userId, name: m.name }))
+  const working = calc.draftResult as CalcResult | null
+  return {
+    ...access,
+    calc,
+    shown,
+    pkg,
+    remarks,
+    ticks,
+    pending,
+    materials,
+    checkers: people('checker'),
+    approvers: people('approver'),
+    workingFails: working && working.feasibility.ok && !working.verdict.pass ? working.verdict.governing : null,
+    revisions: revisions.map((r, i) => ({
+      ...r,
+      assignedChecker: name(r.assignedCheckerId),
+      assignedApprover: name(r.assignedApproverId),
+      openRemarks: blockers[i],
+      memoryValues: r.state === 'approved' ? memoryValuesIn(r.inputs) : [],
+    })),
+  }
 }

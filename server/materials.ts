@@ -4,6 +4,7 @@ import { db } from '@/db'
 import { audit } from '@/db/audit'
 import { projectMaterials } from '@/db/schema'
 import { MATERIALS, materialSchema, type MaterialInput } from '@/lib/checks'
+import { materialNamesIn } from '@/lib/checks/memory-values'
 import { AppError } from '@/lib/errors'
 import { fieldErrorsOf } from '@/lib/schemas/field-errors'
 import { authorise, type Caller } from './access'
@@ -31,18 +32,6 @@ export async function addMaterial(caller: Caller | null, projectId: string, name
   await db.insert(projectMaterials).values({ id, projectId, name, data: parsed.data, source: parsed.data.source, createdBy: who.id })
   await audit({ userId: who.id, action: 'material.added', projectId, detail: { name } })
   return id
-}
-
-/** Every material name the inputs refer to: the values of `material` and `…Material` keys, at any depth. */
-export function materialNamesIn(value: unknown, out = new Set<string>()): Set<string> {
-  if (Array.isArray(value)) value.forEach((v) => materialNamesIn(v, out))
-  else if (value && typeof value === 'object') {
-    for (const [k, v] of Object.entries(value)) {
-      if (typeof v === 'string' && (k === 'material' || k.endsWith('Material'))) out.add(v)
-      else if (k !== 'materials') materialNamesIn(v, out)
-    }
-  }
-  return out
 }
 
 /**

@@ -1,7 +1,14 @@
 import { OpenAPIRegistry, OpenApiGeneratorV31, type RouteConfig } from '@asteasolutions/zod-to-openapi'
 import { z } from 'zod'
 import {
+  auditOut,
   calcOut,
+  compareOut,
+  noticeOut,
+  tickBody,
+  tickOut,
+  verificationOut,
+  verifyBody,
   createRevisionBody,
   errorBody,
   inputsSavedOut,
@@ -48,7 +55,9 @@ const project = z.object({ projectId: z.string() })
 const calc = project.extend({ calcId: z.string() })
 const revision = calc.extend({ revisionId: z.string() })
 const remark = revision.extend({ remarkId: z.string() })
-const paramsFor = (path: string) => (path.includes('{remarkId}') ? remark : path.includes('{revisionId}') ? revision : path.includes('{calcId}') ? calc : path.includes('{projectId}') ? project : undefined)
+const step = revision.extend({ stepId: z.string() })
+const paramsFor = (path: string) =>
+  path.includes('{remarkId}') ? remark : path.includes('{stepId}') ? step : path.includes('{revisionId}') ? revision : path.includes('{calcId}') ? calc : path.includes('{projectId}') ? project : undefined
 
 const calcInput = z.record(z.string(), z.unknown()).describe('A calc input in the CLI’s format: `mechanism`, `geometry`, `loads`, … and optionally `basis`, `defaults`, `joints`, `links` (docs/engine.md, docs/checks.md)')
 const createCalcBody = createCalcSchema.omit({ calcType: true }).extend({ mechanism: createCalcSchema.shape.calcType })
@@ -72,6 +81,13 @@ export const OPERATIONS: Op[] = [
   { method: 'post', path: `${base}/remarks`, summary: 'Add a remark on a step', body: remarkBody, ok: { status: 201, schema: remarkOut, description: 'The new remark' }, errors: [400, 401, 403, 404, 409, 413, 415, 422] },
   { method: 'post', path: `${base}/remarks/{remarkId}/replies`, summary: 'Reply to a remark', body: replyBody, ok: { status: 201, schema: remarkOut, description: 'The remark with the reply' }, errors: [400, 401, 403, 404, 409, 413, 415, 422] },
   { method: 'post', path: `${base}/remarks/{remarkId}/close`, summary: 'Close a remark', ok: { status: 200, schema: remarkOut, description: 'The closed remark' }, errors: [401, 403, 404] },
+  { method: 'get', path: `${base}/ticks`, summary: 'Steps ticked as verified, by whom and when', ok: { status: 200, schema: items(tickOut), description: 'Ticks' }, errors: [401, 404] },
+  { method: 'put', path: `${base}/ticks/{stepId}`, summary: 'Tick a step as verified (`{ ticked: false }` takes it back)', body: tickBody, ok: { status: 200, schema: items(tickOut), description: 'Every tick of the revision' }, errors: [400, 401, 403, 404, 409, 415, 422] },
+  { method: 'delete', path: `${base}/ticks/{stepId}`, summary: 'Take a tick back', ok: { status: 200, schema: items(tickOut), description: 'Every tick of the revision' }, errors: [401, 403, 404, 409] },
+  { method: 'get', path: '/api/v1/projects/{projectId}/calcs/{calcId}/compare', summary: 'What changed between two revisions', query: z.object({ from: z.string(), to: z.string() }), ok: { status: 200, schema: compareOut, description: 'Changed inputs, results, verdicts and checks' }, errors: [401, 404, 422] },
+  { method: 'get', path: '/api/v1/projects/{projectId}/calcs/{calcId}/audit', summary: 'The calc’s audit trail (JSON, or CSV with Accept: text/csv)', ok: { status: 200, schema: items(auditOut), description: 'Events, oldest first' }, errors: [401, 404] },
+  { method: 'get', path: '/api/v1/notices', summary: 'Your in-app notices, newest first', ok: { status: 200, schema: items(noticeOut), description: 'Notices' }, errors: [401] },
+  { method: 'post', path: '/api/v1/verify', summary: 'Public: is this PDF (multipart field `file`) or code (`{ code }`) an issued package of this server?', body: verifyBody, ok: { status: 200, schema: verificationOut, description: 'The verdict' }, errors: [400, 413, 415, 422], open: true },
   { method: 'post', path: '/api/v1/analyse', summary: 'Run a calc without storing it: the CLI’s input in, the CLI’s output out', body: calcInput, ok: { status: 200, schema: z.record(z.string(), z.unknown()), description: 'The CLI’s output JSON' }, errors: [400, 401, 413, 415, 422] },
   { method: 'get', path: '/api/v1/openapi.json', summary: 'This document', ok: { status: 200, schema: z.record(z.string(), z.unknown()), description: 'OpenAPI 3.1' }, errors: [], open: true },
 ]
@@ -96,7 +112,7 @@ export function openApiDocument(): object {
       request: {
         params: paramsFor(op.path),
         query: op.query,
-        body: op.body ? { required: op.method !== 'post' || op.body !== createRevisionBody, content: { 'application/json': { schema: op.body } } } : undefined,
+        body: op.body ? { required: op.body !== createRevisionBody && op.body !== tickBody, content: op.path.endsWith('/verify') ? { 'application/json': { schema: op.body }, 'multipart/form-data': { schema: z.object({ file: z.string().describe('The PDF (binary)') }) } } : { 'application/json': { schema: op.body } } } : undefined,
       },
       responses,
     })

@@ -1,10 +1,11 @@
 import { asc, eq, inArray } from 'drizzle-orm'
 import { db } from '@/db'
-import { calcs, checkRemarks, projects, revisions, users, type Calc, type Project, type Revision } from '@/db/schema'
+import { calcs, projects, revisions, users, type Calc, type Project, type Revision } from '@/db/schema'
 import { inputRowsOf } from '@/lib/calc/input-rows'
 import { parseCalcInput, type CalcResult } from '@/lib/calc/run'
 import { ENGINE_VERSION } from '@/lib/calc/version'
-import { STATES } from '@/lib/review/workflow'
+import { SEVERITY_LABELS } from '@/lib/review/workflow'
+import { remarksWithThreads } from './remarks'
 import type { CalcType, Paper, ReportPackage } from '@/reports/types'
 import { TEMPLATE_VERSION } from '@/reports/version'
 
@@ -24,7 +25,7 @@ function historyOf(all: Revision[]) {
     label: r.label,
     state: r.state,
     date: day(r.issuedAt ?? r.approvedAt ?? r.checkedAt ?? r.createdAt) ?? '',
-    note: STATES[r.state].label,
+    note: r.reason ?? (r.submittedFailing ? 'submitted with a failing check' : ''),
   }))
 }
 
@@ -45,8 +46,8 @@ function common(project: Project, calc: Calc, paper: Paper) {
 export async function reportPackageOf(rev: Revision, others: Revision[], paper: Paper = 'A4'): Promise<ReportPackage> {
   const [calc] = await db.select().from(calcs).where(eq(calcs.id, rev.calcId))
   const [project] = await db.select().from(projects).where(eq(projects.id, calc.projectId))
-  const remarks = await db.select().from(checkRemarks).where(eq(checkRemarks.revisionId, rev.id)).orderBy(asc(checkRemarks.createdAt))
-  const name = await namesOf([rev.engineerId, rev.checkerId, rev.approverId, ...remarks.map((r) => r.authorId)])
+  const remarks = await remarksWithThreads(rev.id)
+  const name = await namesOf([rev.engineerId, rev.checkerId, rev.approverId])
   const parsed = parseCalcInput(rev.inputs)
   if (!parsed.ok) throw new Error(`stored inputs of revision ${rev.label} no longer parse: ${JSON.stringify(parsed.fieldErrors)}`)
   const all = [...others.filter((r) => r.id !== rev.id), rev].sort((a, b) => a.createdAt.getTime() - b.createdAt.getTime())
@@ -61,10 +62,10 @@ export async function reportPackageOf(rev: Revision, others: Revision[], paper: 
     },
     history: historyOf(all),
     remarks: remarks.map((r) => ({
-      stepId: r.stepId,
-      author: name(r.authorId),
+      stepId: r.stepId ?? '',
+      author: r.author,
       role: 'checker',
-      text: r.response ? `${r.text} — Response: ${r.response}` : r.text,
+      text: [`[${SEVERITY_LABELS[r.severity]}] ${r.text}`, ...r.replies.map((x) => `${x.author}, ${day(x.createdAt)}: ${x.text}`)].join(' — '),
       status: r.status,
       date: day(r.createdAt) ?? '',
     })),

@@ -1,18 +1,24 @@
 import { randomUUID } from 'node:crypto'
-import { and, eq, inArray } from 'drizzle-orm'
+import { and, asc, eq, inArray } from 'drizzle-orm'
 import { db } from '@/db'
 import { audit } from '@/db/audit'
-import { attachments, calcs, revisions, type Revision } from '@/db/schema'
+import { attachments, calcs, materialConfirmations, projectMembers, revisionEvents, revisions, users, type Revision } from '@/db/schema'
 import { canonicalJson, sha256Hex } from '@/lib/calc/hash'
 import { calculate } from '@/lib/calc/run'
 import { ENGINE_VERSION } from '@/lib/calc/version'
+import { memoryValuesIn } from '@/lib/checks/memory-values'
 import { AppError } from '@/lib/errors'
-import { SUBMIT, STATES, transitionOf, type TransitionAction } from '@/lib/review/workflow'
+import type { ProjectRole } from '@/lib/review/roles'
+import { STATES, SUBMIT, transitionOf, type TransitionAction, type TransitionSpec } from '@/lib/review/workflow'
 import type { FileStore } from '@/lib/storage'
 import type { Paper, ReportPackage } from '@/reports/types'
 import { authoriseCalc, type Caller } from './access'
 import { attachmentBytes, pendingAttachmentFiles } from './attachments'
+import { verifyPassword } from './auth/password'
+import { notify } from './notices'
+import { carryOverRemarks, openRemarks } from './remarks'
 import { reportPackageOf, TEMPLATE_VERSION } from './report-package'
+import { signStatement, verificationCodeOf } from './signing'
 
 /** The report pipeline, passed in: the app loads it outside the Next bundle, tests import it directly. */
 export interface ReportRenderer {
@@ -40,9 +46,9 @@ async function revisionsOf(calcId: string) {
 }
 
 /** Renders `rev` (stored or about to be) with the other revisions as they will stand, and stores the PDF under its hash. */
-async function renderAndStore(rev: Revision, others: Revision[], deps: RevisionDeps, attachments: { name: string; bytes: Uint8Array }[]) {
+async function renderAndStore(rev: Revision, others: Revision[], deps: RevisionDeps, appendices: { name: string; bytes: Uint8Array }[]) {
   const pkg = await reportPackageOf(rev, others)
-  const bytes = await deps.renderer.renderPdf({ ...pkg, attachments })
+  const bytes = await deps.renderer.renderPdf({ ...pkg, attachments: appendices })
   const pdfHash = sha256Hex(bytes)
   const pdfKey = `pdf/${pdfHash}.pdf`
   await deps.store.put(pdfKey, bytes)
@@ -52,16 +58,45 @@ async function renderAndStore(rev: Revision, others: Revision[], deps: RevisionD
 const superseding = (all: Revision[], states: readonly string[], except: string) =>
   all.filter((r) => r.id !== except && states.includes(r.state)).map((r) => ({ ...r, state: 'superseded' as const }))
 
+/** A named signer must be a member with that role, and never the engineer who submits. */
+async function namedMember(projectId: string, userId: string | undefined, role: ProjectRole, engineerId: string, field: string) {
+  if (!userId) return null
+  if (userId === engineerId) throw new AppError('invalid', 'You cannot check or approve your own revision.', { [field]: 'Name someone other than yourself.' })
+  const [m] = await db
+    .select({ role: projectMembers.role })
+    .from(projectMembers)
+    .where(and(eq(projectMembers.projectId, projectId), eq(projectMembers.userId, userId)))
+  if (m?.role !== role) throw new AppError('invalid', `The person named is not a ${role} of this project.`, { [field]: `Choose a member with the ${role} role.` })
+  return userId
+}
+
+export interface SubmitOptions {
+  reason?: string
+  checkerId?: string
+  approverId?: string
+  /** The engineer confirms submitting a calc whose verdict is FAIL. */
+  confirmFailing?: boolean
+}
+
 /**
  * Freezes the calc's working inputs into a new revision that goes to check: runs the calc, renders
- * the PDF, then writes the revision, its PDF reference, the superseding of open revisions and the
- * pending appendices in one transaction — a failure anywhere before it changes nothing.
+ * the PDF, then writes the revision, its PDF reference, the superseding of open revisions (whose
+ * open remarks follow it), the pending appendices and the history entry in one transaction — a
+ * failure anywhere before it changes nothing. The named checker is told.
  */
-export async function saveRevision(caller: Caller | null, projectId: string, calcId: string, deps: RevisionDeps) {
+export async function saveRevision(caller: Caller | null, projectId: string, calcId: string, deps: RevisionDeps, opts: SubmitOptions = {}) {
   const { calc, caller: who } = await authoriseCalc(caller, projectId, calcId, SUBMIT.permission)
   const run = calculate(calc.draftInputs)
   if (!run.ok) throw new AppError('invalid', 'The inputs have errors; fix them before saving a revision.', run.fieldErrors)
   if (!run.result.feasibility.ok) throw new AppError('invalid', `The mechanism is not feasible: ${run.result.feasibility.message}`)
+  const failing = !run.result.verdict.pass
+  if (failing && !opts.confirmFailing) {
+    throw new AppError('conflict', `The calc fails (${run.result.verdict.governing}). Confirm to submit it failing; the revision will say so.`, {
+      confirmFailing: 'The calc fails a check: confirm to submit it anyway.',
+    })
+  }
+  const checkerId = await namedMember(projectId, opts.checkerId, 'checker', who.id, 'checkerId')
+  const approverId = await namedMember(projectId, opts.approverId, 'approver', who.id, 'approverId')
   const existing = await revisionsOf(calc.id)
   const now = new Date()
   // The stored JSON is the canonical text, so the hash can be recomputed from the row alone.
@@ -86,6 +121,11 @@ export async function saveRevision(caller: Caller | null, projectId: string, cal
     checkedAt: null,
     approvedAt: null,
     issuedAt: null,
+    reason: opts.reason?.trim() || null,
+    submittedFailing: failing,
+    assignedCheckerId: checkerId,
+    assignedApproverId: approverId,
+    verificationCode: null,
     createdAt: now,
   }
   const replaced = superseding(existing, SUBMIT.supersedes, rev.id)
@@ -95,52 +135,136 @@ export async function saveRevision(caller: Caller | null, projectId: string, cal
   await db.transaction(async (tx) => {
     await tx.insert(revisions).values({ ...rev, ...pdf })
     if (replaced.length) await tx.update(revisions).set({ state: 'superseded' }).where(inArray(revisions.id, replaced.map((r) => r.id)))
+    await carryOverRemarks(tx, replaced.map((r) => r.id), rev)
     if (appendices.length) await tx.update(attachments).set({ revisionId: rev.id }).where(inArray(attachments.id, appendices.map((a) => a.id)))
-    await tx.update(calcs).set({ state: SUBMIT.to, updatedAt: now }).where(eq(calcs.id, calc.id))
+    await tx.insert(revisionEvents).values({ revisionId: rev.id, action: 'submit', fromState: null, toState: rev.state, userId: who.id, reason: rev.reason, at: now })
+    await tx
+      .update(calcs)
+      .set({ state: SUBMIT.to, updatedAt: now, checkerId: checkerId ?? calc.checkerId, approverId: approverId ?? calc.approverId })
+      .where(eq(calcs.id, calc.id))
   })
-  await audit({ userId: who.id, action: 'revision.saved', projectId, calcId: calc.id, detail: { revisionId: rev.id } })
+  await audit({ userId: who.id, action: 'revision.saved', projectId, calcId: calc.id, detail: { revisionId: rev.id, failing } })
+  await notify({ to: SUBMIT.notice, kind: 'submit', calc, revision: rev, by: who, text: `${calc.number} rev ${rev.label} waits for your check` })
   return rev.id
 }
 
+export interface TransitionOptions {
+  password?: string
+  reason?: string
+  /** The approver confirms every "from memory" material value the revision uses (issue only). */
+  confirmMaterials?: boolean
+}
+
+async function checkPassword(who: Caller, password: string | undefined) {
+  if (!password) throw new AppError('invalid', 'Enter your password to sign.', { password: 'Enter your password to sign.' })
+  const [u] = await db.select({ hash: users.passwordHash }).from(users).where(eq(users.id, who.id))
+  if (!u?.hash || !(await verifyPassword(u.hash, password))) throw new AppError('invalid', 'The password is not right; nothing was signed.', { password: 'Wrong password.' })
+}
+
+/** What still stops a transition that the table guards with open remarks or unconfirmed material values. */
+async function refuseBlocked(t: TransitionSpec, rev: Revision, who: Caller, opts: TransitionOptions) {
+  if (t.blockedBy) {
+    const open = await openRemarks(rev.id)
+    const n = t.blockedBy === 'must-resolve' ? open.mustResolve : open.any
+    if (n > 0) {
+      const what = t.blockedBy === 'must-resolve' ? 'remark that must be resolved is' : 'remark is'
+      throw new AppError('conflict', `${n} ${what.replace('remark', n === 1 ? 'remark' : 'remarks').replace(' is', n === 1 ? ' is' : ' are')} still open on revision ${rev.label}: close ${n === 1 ? 'it' : 'them'} first.`)
+    }
+  }
+  if (t.to !== 'issued') return []
+  const confirmed = new Set((await db.select({ value: materialConfirmations.value }).from(materialConfirmations).where(eq(materialConfirmations.revisionId, rev.id))).map((r) => r.value))
+  const missing = memoryValuesIn(rev.inputs).filter((m) => !confirmed.has(m.key))
+  if (missing.length && !opts.confirmMaterials) {
+    throw new AppError(
+      'conflict',
+      `Confirm these material values against their standards before issue: ${missing.map((m) => `${m.key} (${m.source})`).join('; ')}.`,
+      Object.fromEntries(missing.map((m) => [`materials.${m.key}`, m.source])),
+    )
+  }
+  return missing.map((m) => ({ revisionId: rev.id, value: m.key, userId: who.id }))
+}
+
 /**
- * Moves a revision along one transition of the workflow table and signs it. The same person may
- * not sign one revision in two roles (independence). The PDF is rendered with the change applied
- * before anything is written; the write only happens if the revision is still in the expected
- * state, so of two people acting at once exactly one wins.
+ * Moves a revision along one transition of the workflow table. Signing transitions ask for the
+ * person's password and record an Ed25519 signature of the server over the revision's content hash,
+ * the action, the person and the time. The same person may not sign one revision in two roles; a
+ * person named at submission is the only one who may take that role's actions. The write only
+ * happens if the revision is still in the expected state, so of two people acting at once exactly
+ * one wins. Whoever must act next is told.
  */
-export async function transitionRevision(caller: Caller | null, projectId: string, calcId: string, revisionId: string, action: TransitionAction | string, deps: RevisionDeps) {
+export async function transitionRevision(
+  caller: Caller | null,
+  projectId: string,
+  calcId: string,
+  revisionId: string,
+  action: TransitionAction | string,
+  deps: RevisionDeps,
+  opts: TransitionOptions = {},
+) {
   const t = transitionOf(action)
-  if (!t) throw new AppError('invalid', `Unknown action "${action}".`, { action: `must be one of the workflow's actions` })
+  if (!t) throw new AppError('invalid', `Unknown action "${action}".`, { action: 'must be one of the workflow’s actions' })
   const { calc, caller: who } = await authoriseCalc(caller, projectId, calcId, t.permission)
   const all = await revisionsOf(calc.id)
   const rev = all.find((r) => r.id === revisionId)
   if (!rev) throw new AppError('not_found', 'No such revision.')
-  if (rev.state !== t.from) {
-    throw new AppError('conflict', `Revision ${rev.label} is ${STATES[rev.state].label.toLowerCase()}; only a revision that is ${STATES[t.from].label.toLowerCase()} can be moved to ${STATES[t.to].label.toLowerCase()}.`)
+  const label = (s: string) => STATES[s as Revision['state']].label.toLowerCase()
+  if (!t.from.includes(rev.state)) {
+    throw new AppError('conflict', `Revision ${rev.label} is ${label(rev.state)}; “${t.button}” needs a revision that is ${t.from.map(label).join(' or ')}.`)
   }
-  const signers = [rev.engineerId, rev.checkerId, rev.approverId]
-  if (t.signs && signers.includes(who.id)) throw new AppError('forbidden', 'The same person cannot sign a revision in two roles.')
+  const named = t.named === 'checker' ? rev.assignedCheckerId : t.named === 'approver' ? rev.assignedApproverId : null
+  if (named && named !== who.id) throw new AppError('forbidden', `Only the ${t.named} named when revision ${rev.label} was submitted may do this.`)
+  if (t.signs && [rev.engineerId, rev.checkerId, rev.approverId].includes(who.id)) throw new AppError('forbidden', 'The same person cannot sign a revision in two roles.')
+  if (t.reason && !opts.reason?.trim()) throw new AppError('invalid', 'Give a reason.', { reason: 'Say why; it is kept in the history.' })
+  if (t.password) await checkPassword(who, opts.password)
+  const confirmations = await refuseBlocked(t, rev, who, opts)
 
   const now = new Date()
+  const signed = t.password ? signStatement({ revision: rev.id, calc: calc.number, label: rev.label, contentHash: rev.contentHash, action: t.action, state: t.to, signer: { id: who.id, name: who.name }, at: now.toISOString() }) : null
   const sign = t.signs === 'checker' ? { checkerId: who.id, checkedAt: now } : t.signs === 'approver' ? { approverId: who.id, approvedAt: now } : {}
-  const change = { ...sign, state: t.to, frozenAt: now.toISOString(), ...(t.to === 'issued' ? { issuedAt: now } : {}) }
+  const issue = t.to === 'issued' && signed ? { issuedAt: now, verificationCode: verificationCodeOf(signed.signature) } : {}
+  // A signing step re-renders the record with its signature; the others only change the state.
+  const rerender = t.signs !== null || t.to === 'issued'
+  const change = { ...sign, ...issue, state: t.to, ...(rerender ? { frozenAt: now.toISOString() } : {}) }
   const replaced = superseding(all, t.supersedes, rev.id)
   const others = [...all.filter((r) => !replaced.some((x) => x.id === r.id)), ...replaced]
-  const pdf = await renderAndStore({ ...rev, ...change }, others, deps, await attachmentBytes(rev.id, deps.store))
+  const pdf = rerender ? await renderAndStore({ ...rev, ...change }, others, deps, await attachmentBytes(rev.id, deps.store)) : {}
   await db.transaction(async (tx) => {
     const moved = await tx
       .update(revisions)
       .set({ ...change, ...pdf })
-      .where(and(eq(revisions.id, rev.id), eq(revisions.state, t.from)))
+      .where(and(eq(revisions.id, rev.id), eq(revisions.state, rev.state)))
     if (moved.rowsAffected === 0) throw new AppError('conflict', `Revision ${rev.label} was changed by someone else a moment ago; reload to see its state.`)
     if (replaced.length) await tx.update(revisions).set({ state: 'superseded' }).where(inArray(revisions.id, replaced.map((r) => r.id)))
+    if (confirmations.length) await tx.insert(materialConfirmations).values(confirmations.map((c) => ({ ...c, at: now })))
+    await tx.insert(revisionEvents).values({
+      revisionId: rev.id,
+      action: t.action,
+      fromState: rev.state,
+      toState: t.to,
+      userId: who.id,
+      reason: opts.reason?.trim() || null,
+      statement: signed?.statement ?? null,
+      signature: signed?.signature ?? null,
+      at: now,
+    })
     await tx
       .update(calcs)
       .set({ state: t.to, updatedAt: now, ...(t.signs === 'checker' ? { checkerId: who.id } : t.signs === 'approver' ? { approverId: who.id } : {}) })
       .where(eq(calcs.id, calc.id))
   })
-  await audit({ userId: who.id, action: `revision.${t.action}`, projectId, calcId: calc.id, detail: { revisionId: rev.id } })
+  await audit({ userId: who.id, action: `revision.${t.action}`, projectId, calcId: calc.id, detail: { revisionId: rev.id, reason: opts.reason ?? null, materialsConfirmed: confirmations.map((c) => c.value) } })
+  await notify({ to: t.notice, kind: t.action, calc, revision: rev, by: who, text: `${calc.number} rev ${rev.label} ${t.ask}` })
   return { ...rev, ...change }
+}
+
+/** The history of one revision: every transition with who, when, why, and its signature if signed. */
+export async function revisionHistory(revisionId: string) {
+  return db
+    .select({ action: revisionEvents.action, from: revisionEvents.fromState, to: revisionEvents.toState, by: users.name, reason: revisionEvents.reason, signed: revisionEvents.signature, at: revisionEvents.at })
+    .from(revisionEvents)
+    .innerJoin(users, eq(users.id, revisionEvents.userId))
+    .where(eq(revisionEvents.revisionId, revisionId))
+    .orderBy(asc(revisionEvents.at), asc(revisionEvents.id))
 }
 
 export async function getRevision(caller: Caller | null, projectId: string, calcId: string, revisionId: string) {
@@ -150,22 +274,28 @@ export async function getRevision(caller: Caller | null, projectId: string, calc
   return { calc, revision: rev }
 }
 
+/** States whose stored A4 PDF is the one to hand out; in the others a copy is rendered with the state's watermark. */
+const STORED_PDF_STATES: readonly Revision['state'][] = ['in-check', 'checked', 'approved', 'issued']
+
 /**
  * A revision's PDF. A4 is the stored, hashed record (checked against its hash before sending).
- * US Letter, and a superseded revision (so it carries the SUPERSEDED watermark), are rendered on
- * demand from the same frozen revision; the stored record stays as it was signed.
+ * US Letter, and a revision no longer current (superseded, voided, returned, withdrawn: so it carries
+ * that watermark), are rendered on demand from the same frozen revision; the stored record stays.
  */
 export async function revisionPdf(caller: Caller | null, projectId: string, calcId: string, revisionId: string, paper: Paper, deps: RevisionDeps) {
-  const { project } = await authoriseCalc(caller, projectId, calcId, 'pdf.download')
-  const { calc, revision: rev } = await getRevision(caller, projectId, calcId, revisionId)
+  const { project, caller: who } = await authoriseCalc(caller, projectId, calcId, 'pdf.download')
+  const { calc, revision: rev } = await getRevision(who, projectId, calcId, revisionId)
   let bytes: Uint8Array
-  if (paper === 'A4' && rev.pdfKey && rev.state !== 'superseded') {
+  if (paper === 'A4' && rev.pdfKey && STORED_PDF_STATES.includes(rev.state)) {
     bytes = await deps.store.get(rev.pdfKey)
     if (sha256Hex(bytes) !== rev.pdfHash) throw new Error(`stored PDF of revision ${rev.id} does not match its hash`)
   } else {
     const pkg = await reportPackageOf(rev, await revisionsOf(calc.id), paper)
     bytes = await deps.renderer.renderPdf({ ...pkg, attachments: await attachmentBytes(rev.id, deps.store) })
   }
+  if (STATES[rev.state].sealed) {
+    await audit({ userId: who.id, action: 'pdf.downloaded', projectId, calcId: calc.id, detail: { revisionId: rev.id, paper, state: rev.state } })
+  }
   const filename = `${project.code}_${calc.number}_rev${rev.label}_${paper}.pdf`.replace(/[^A-Za-z0-9._-]/g, '_')
-  return { bytes, filename }
+  return { bytes, filename, revision: rev }
 }

@@ -15,7 +15,7 @@ export const PERMISSIONS = {
   'calc.submit': ['engineer'],
   'material.create': ['engineer', 'checker', 'approver'],
   'remark.create': ['checker'],
-  'remark.respond': ['engineer'],
+  'remark.respond': ['engineer', 'checker'],
   'remark.close': ['checker'],
   'calc.check': ['checker'],
   'calc.approve': ['approver'],

@@ -1,6 +1,6 @@
 import { z } from 'zod'
 import { PROJECT_ROLES } from '@/lib/review/roles'
-import { REVISION_STATES, TRANSITION_ACTIONS } from '@/lib/review/workflow'
+import { REMARK_SEVERITIES, REVISION_STATES, TRANSITION_ACTIONS } from '@/lib/review/workflow'
 
 /*
  * Bodies and answers of the REST API v1 (app/api/v1). Request schemas are the ones the route
@@ -87,14 +87,19 @@ export const revisionOut = revisionRowOut.extend({
   signatures: z.object({ engineer: signatureOut, checker: signatureOut, approver: signatureOut, issuedAt: z.string().nullable() }),
 })
 
+export const replyOut = z.object({ id: z.string(), text: z.string(), author: z.string(), createdAt: z.string() })
+
 export const remarkOut = z.object({
   id: z.string(),
-  stepId: z.string(),
+  stepId: z.string().nullable().describe('The step, table or figure id; null for the whole calc'),
+  severity: z.enum(REMARK_SEVERITIES),
   text: z.string(),
   status: z.enum(['open', 'answered', 'closed']),
-  response: z.string().nullable(),
   author: z.string(),
   createdAt: z.string(),
+  closedAt: z.string().nullable(),
+  carriedFromId: z.string().nullable().describe('The remark on an earlier revision this one continues'),
+  replies: z.array(replyOut),
 })
 
 export const inputsSavedOut = z.object({ summary: summaryOut })
@@ -104,20 +109,23 @@ export const createRevisionBody = z
     reason: z.string().trim().max(500).optional(),
     checkerId: z.string().optional(),
     approverId: z.string().optional(),
+    confirmFailing: z.boolean().optional().describe('Submit although a check fails (recorded on the revision)'),
   })
   .strict()
 
 export const transitionBody = z
   .object({
     action: z.enum(TRANSITION_ACTIONS, { error: `must be one of ${TRANSITION_ACTIONS.join(', ')}` }),
-    password: z.string().max(200).optional(),
-    reason: z.string().trim().max(500).optional(),
+    password: z.string().max(200).optional().describe('Needed by check, approve, issue and void'),
+    reason: z.string().trim().max(500).optional().describe('Needed by return, withdraw and void'),
+    confirmMaterials: z.literal(true).optional().describe('issue: the approver confirms every "from memory" material value the revision uses'),
   })
   .strict()
 
 export const remarkBody = z
   .object({
-    stepId: z.string().min(1, 'name the step the remark is about'),
+    stepId: z.string().min(1).max(200).nullish().describe('A step, table or figure id; leave out for the whole calc'),
+    severity: z.enum(REMARK_SEVERITIES, { error: `must be one of ${REMARK_SEVERITIES.join(', ')}` }),
     text: z.string().trim().min(3, 'write the remark (at least 3 characters)').max(4000),
   })
   .strict()
@@ -129,3 +137,36 @@ export const idOut = z.object({ id: z.string() })
 export function items<T extends z.ZodType>(item: T) {
   return z.object({ items: z.array(item) })
 }
+
+export const tickBody = z.object({ ticked: z.boolean().default(true) }).strict()
+
+export const verifyBody = z.object({ code: z.string().trim().min(1, 'type the code printed on the package').max(40) }).strict()
+
+export const verificationOut = z.object({
+  issued: z.boolean(),
+  signatureValid: z.boolean(),
+  superseded: z.boolean(),
+  voided: z.boolean(),
+  project: z.string().nullable(),
+  calc: z.string().nullable(),
+  revision: z.string().nullable(),
+  issuedAt: z.string().nullable(),
+  message: z.string(),
+})
+
+export const tickOut = z.object({ stepId: z.string(), by: z.string(), at: z.string() })
+
+export const noticeOut = z.object({ id: z.string(), kind: z.string(), text: z.string(), link: z.string(), createdAt: z.string(), read: z.boolean() })
+
+export const auditOut = z.object({ at: z.string(), who: z.string(), action: z.string(), what: z.string(), calc: z.string().nullable(), detail: z.record(z.string(), z.unknown()) })
+
+const valueChange = z.object({ id: z.string(), title: z.string(), unit: z.string(), from: z.number().nullable(), to: z.number().nullable(), change: z.number().nullable(), percent: z.number().nullable() })
+
+export const compareOut = z.object({
+  from: z.object({ id: z.string(), label: z.string() }),
+  to: z.object({ id: z.string(), label: z.string() }),
+  inputs: z.array(z.object({ path: z.string(), from: z.unknown(), to: z.unknown() })),
+  verdict: z.object({ from: z.unknown(), to: z.unknown(), changed: z.boolean() }),
+  values: z.array(valueChange),
+  checks: z.array(valueChange.extend({ fromPass: z.boolean().nullable(), toPass: z.boolean().nullable() })),
+})

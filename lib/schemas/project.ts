@@ -1,5 +1,6 @@
 import { z } from 'zod'
 import { PROJECT_ROLES } from '@/lib/review/roles'
+import { REMARK_SEVERITIES } from '@/lib/review/workflow'
 import { isMechanismId, mechanismIds, mechanisms, type MechanismId } from '@/lib/mechanisms'
 import { emailField } from './auth'
 
@@ -48,14 +49,16 @@ export const createProjectSchema = z.object({
 export const remarkSchema = z.object({
   calcId: z.string().min(1),
   revisionId: z.string().min(1),
-  stepId: z.string().min(1, 'Choose the step the remark is about.'),
+  /** Empty for a remark on the whole calc. */
+  stepId: z.string().max(200).optional().transform((v) => v || null),
+  severity: z.enum(REMARK_SEVERITIES, { message: 'Choose how serious the remark is.' }),
   text: z.string().trim().min(3, 'Write the remark (at least 3 characters).').max(4000),
 })
 
-export const remarkResponseSchema = z.object({
+export const remarkReplySchema = z.object({
   calcId: z.string().min(1),
   remarkId: z.string().min(1),
-  response: z.string().trim().min(2, 'Write a response.').max(4000),
+  text: z.string().trim().min(2, 'Write a reply.').max(4000),
 })
 
 export const remarkCloseSchema = z.object({ calcId: z.string().min(1), remarkId: z.string().min(1) })

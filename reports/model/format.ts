@@ -2,8 +2,8 @@
  * How values read in both renderings. One formatter, so the PDF, the web view
  * and the tests agree on every digit.
  */
-import { STATE_LABELS } from '../../lib/review/roles'
-import type { StepVerdict } from '../../lib/calc/types'
+import { STATE_LABELS, STATES } from '../../lib/review/workflow'
+import type { StepVerdict } from '../../lib/contract'
 import type { RevisionState } from '../types'
 
 // ASCII hyphen-minus: the shipped Noto Sans has no U+2212, and copied numbers must paste as numbers.
@@ -48,9 +48,7 @@ export const STATE_LABEL: Record<RevisionState, string> = STATE_LABELS
 
 /** Watermark shown across every page, or null for states that may be relied on. */
 export function watermarkFor(state: RevisionState): string | null {
-  if (state === 'draft' || state === 'in-check') return 'DRAFT'
-  if (state === 'superseded') return 'SUPERSEDED'
-  return null
+  return STATES[state].watermark
 }
 
 export function formatDate(iso: string | undefined): string {

@@ -7,6 +7,7 @@ import { calcs, revisions } from '@/db/schema'
 import { saveInputs } from '@/server/calcs'
 import { changeMemberRole } from '@/server/members'
 import type { Caller } from '@/server/access'
+import { DEMO_PASSWORD } from '@/server/demo/demo-data'
 import { localFileStore } from '@/lib/storage'
 import { renderPdf } from '@/reports'
 import { canonicalJson, sha256Hex } from '@/reports/hash'
@@ -34,8 +35,9 @@ async function refused(p: Promise<unknown>, pattern: RegExp) {
 }
 
 const calcByNumber = async (n: string) => (await db.select().from(calcs).where(eq(calcs.number, n)))[0]
-const save = async (n: string, who: Caller) => saveRevision(who, projectId, await calcId(n), deps)
-const move = async (n: string, rev: string, action: string, who: Caller) => transitionRevision(who, projectId, await calcId(n), rev, action, deps)
+const save = async (n: string, who: Caller) => saveRevision(who, projectId, await calcId(n), deps, { reason: 'test', confirmFailing: true })
+const move = async (n: string, rev: string, action: string, who: Caller) =>
+  transitionRevision(who, projectId, await calcId(n), rev, action, deps, { password: DEMO_PASSWORD, confirmMaterials: true, reason: 'test' })
 const revision = async (id: string) => (await db.select().from(revisions).where(eq(revisions.id, id)))[0]
 
 describe('revision labels', () => {
@@ -79,7 +81,7 @@ describe('saving and signing a revision', () => {
   })
 
   it('steps must go in order: approving an unchecked revision is refused', async () => {
-    await expect(move('LC-001', revId, 'approve', people.approver)).rejects.toThrow(/only a revision that is checked/)
+    await expect(move('LC-001', revId, 'approve', people.approver)).rejects.toThrow(/needs a revision that is checked/)
   })
 
   it('check → approve → issue signs the revision, and an issued revision can no longer change', async () => {
@@ -133,16 +135,16 @@ describe('working inputs', () => {
 
 describe('checker remarks', () => {
   it('anchor to an existing step of a revision in check; unknown steps are refused at the step field', async () => {
-    const { addRemark, closeRemark, listRemarks, respondToRemark } = await import('@/server/remarks')
+    const { addRemark, closeRemark, listRemarks, replyToRemark } = await import('@/server/remarks')
     const calc = await calcId('LC-002')
     const rev = await save('LC-002', people.engineer)
     const err = await addRemark(people.checker, projectId, calc, { revisionId: rev, stepId: 'no.such.step', text: 'Why?' }).catch((e: { fieldErrors?: Record<string, string> }) => e)
     expect((err as { fieldErrors?: Record<string, string> }).fieldErrors?.stepId).toMatch(/no step/)
     const id = await addRemark(people.checker, projectId, calc, { revisionId: rev, stepId: 'geo.inversion-constant', text: 'Please state the source of k.' })
-    await respondToRemark(people.engineer, projectId, calc, id, 'Source added: Coxeter §6.1.')
+    await replyToRemark(people.engineer, projectId, calc, id, 'Source added: Coxeter §6.1.')
     await closeRemark(people.checker, projectId, calc, id)
     const [remark] = await listRemarks(people.checker, projectId, calc, rev)
-    expect(remark).toMatchObject({ stepId: 'geo.inversion-constant', status: 'closed', response: 'Source added: Coxeter §6.1.' })
+    expect(remark).toMatchObject({ stepId: 'geo.inversion-constant', status: 'closed', replies: [{ text: 'Source added: Coxeter §6.1.', author: 'Ines Vogt' }] })
     // The remarks log of the package lists it.
     const pkg = await loadReportPackage(rev)
     expect(pkg.remarks[0]).toMatchObject({ stepId: 'geo.inversion-constant', status: 'closed' })

@@ -10,7 +10,7 @@ import { caughtMail } from '@/server/mail-inbox'
 import { addMaterial } from '@/server/materials'
 import { changeMemberRole } from '@/server/members'
 import { createProject } from '@/server/projects'
-import { addRemark, closeRemark, respondToRemark } from '@/server/remarks'
+import { addRemark, closeRemark, replyToRemark } from '@/server/remarks'
 import { revisionPdf, saveRevision, transitionRevision, type RevisionDeps } from '@/server/revisions'
 import { seededDemo, type DemoRole } from '../helpers/demo'
 import { useTempEnvironment } from '../helpers/temp-env'
@@ -50,8 +50,8 @@ const PROBES: Record<Permission, (c: Caller | null) => Promise<unknown>> = {
   'calc.edit': (c) => saveInputs(c, projectId, calcId, { mechanism: 'peaucellier' }),
   'calc.submit': (c) => saveRevision(c, projectId, calcId, deps),
   'material.create': (c) => addMaterial(c, projectId, 'S355', {}),
-  'remark.create': (c) => addRemark(c, projectId, calcId, { revisionId: 'no-such-revision', stepId: 'x', text: 'probe' }),
-  'remark.respond': (c) => respondToRemark(c, projectId, calcId, 'no-such-remark', 'probe'),
+  'remark.create': (c) => addRemark(c, projectId, calcId, { revisionId: 'no-such-revision', stepId: 'x', severity: 'note', text: 'probe' }),
+  'remark.respond': (c) => replyToRemark(c, projectId, calcId, 'no-such-remark', 'probe'),
   'remark.close': (c) => closeRemark(c, projectId, calcId, 'no-such-remark'),
   'calc.check': (c) => transitionRevision(c, projectId, calcId, 'no-such-revision', 'check', deps),
   'calc.approve': (c) => transitionRevision(c, projectId, calcId, 'no-such-revision', 'approve', deps),

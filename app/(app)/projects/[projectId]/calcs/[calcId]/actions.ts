@@ -5,12 +5,13 @@ import { z } from 'zod'
 import { dataAction, formAction } from '@/app/_lib/action'
 import { rendererDeps } from '@/app/_lib/renderer'
 import { transitionOf } from '@/lib/review/workflow'
-import { remarkCloseSchema, remarkResponseSchema, remarkSchema } from '@/lib/schemas/project'
+import { remarkCloseSchema, remarkReplySchema, remarkSchema } from '@/lib/schemas/project'
 import { localFileStore } from '@/lib/storage'
 import { addAttachment } from '@/server/attachments'
 import { saveInputs } from '@/server/calcs'
-import { addRemark, closeRemark, respondToRemark } from '@/server/remarks'
-import { saveRevision, transitionRevision } from '@/server/revisions'
+import { addRemark, closeRemark, replyToRemark } from '@/server/remarks'
+import { saveRevision, transitionRevision, type SubmitOptions, type TransitionOptions } from '@/server/revisions'
+import { setTick } from '@/server/ticks'
 
 const calcPath = (projectId: string, calcId: string) => `/projects/${projectId}/calcs/${calcId}`
 
@@ -23,15 +24,15 @@ export const saveInputsAction = dataAction(async (caller, projectId: string, cal
   return { ok: true, message: feasible ? 'Saved and run.' : `Saved. ${feasibility}` }
 })
 
-export const saveRevisionAction = dataAction(async (caller, projectId: string, calcId: string) => {
-  await saveRevision(caller, projectId, calcId, await rendererDeps())
+export const saveRevisionAction = dataAction(async (caller, projectId: string, calcId: string, opts: SubmitOptions) => {
+  await saveRevision(caller, projectId, calcId, await rendererDeps(), opts)
   revalidatePath(calcPath(projectId, calcId))
   return { ok: true, message: 'Revision saved and sent to check.' }
 })
 
 /** Any transition of the workflow table, by its action name. */
-export const transitionAction = dataAction(async (caller, projectId: string, calcId: string, revisionId: string, action: string) => {
-  await transitionRevision(caller, projectId, calcId, revisionId, action, await rendererDeps())
+export const transitionAction = dataAction(async (caller, projectId: string, calcId: string, revisionId: string, action: string, opts: TransitionOptions) => {
+  await transitionRevision(caller, projectId, calcId, revisionId, action, await rendererDeps(), opts)
   revalidatePath(calcPath(projectId, calcId))
   return { ok: true, message: transitionOf(action)?.done }
 })
@@ -47,13 +48,18 @@ export const addAttachmentAction = formAction(z.object({ calcId: z.string().min(
 export const addRemarkAction = formAction(remarkSchema, async ({ calcId, ...remark }, { projectId, caller }) => {
   await addRemark(caller, projectId, calcId, remark)
   revalidatePath(calcPath(projectId, calcId))
-  return { ok: true, message: `Remark on ${remark.stepId} recorded.` }
+  return { ok: true, message: remark.stepId ? 'Remark recorded at the step.' : 'Remark on the whole calc recorded.' }
 })
 
-export const respondRemarkAction = formAction(remarkResponseSchema, async ({ calcId, remarkId, response }, { projectId, caller }) => {
-  await respondToRemark(caller, projectId, calcId, remarkId, response)
+export const replyRemarkAction = formAction(remarkReplySchema, async ({ calcId, remarkId, text }, { projectId, caller }) => {
+  await replyToRemark(caller, projectId, calcId, remarkId, text)
   revalidatePath(calcPath(projectId, calcId))
-  return { ok: true, message: 'Response recorded.' }
+  return { ok: true, message: 'Reply added.' }
+})
+
+export const tickStepAction = dataAction(async (caller, projectId: string, calcId: string, revisionId: string, stepId: string, ticked: boolean) => {
+  const ticks = await setTick(caller, projectId, calcId, revisionId, stepId, ticked)
+  return { ok: true, data: { ticks: ticks.map((t) => ({ stepId: t.stepId, by: t.by, at: t.at.toISOString() })) } }
 })
 
 export const closeRemarkAction = formAction(remarkCloseSchema, async ({ calcId, remarkId }, { projectId, caller }) => {

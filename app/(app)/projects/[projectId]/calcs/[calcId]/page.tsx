@@ -7,19 +7,18 @@ import { StateBadge } from '@/app/_components/state-badge'
 import { loadProjectContext } from '@/app/_lib/project-context'
 import { reports } from '@/app/_lib/renderer'
 import { defaultCalcInputs } from '@/lib/calc/defaults'
-import type { CalcResult } from '@/lib/calc/run'
 import { MATERIALS } from '@/lib/checks'
 import { AppError } from '@/lib/errors'
+import { mechanismLabel } from '@/lib/mechanisms'
 import { can } from '@/lib/review/permissions'
 import { TRANSITIONS } from '@/lib/review/workflow'
-import { CALC_TYPE_LABELS, type CalcType } from '@/lib/schemas/project'
 import { getCalcWorkspace } from '@/server/calc-view'
 import { AttachmentsForm } from './attachments-form'
 import { InputsForm } from './inputs-form'
+import { PackageView } from './package-view'
 import { RemarksPanel } from './remarks-panel'
+import { ReviewProvider } from './review-context'
 import { RevisionsPanel } from './revisions-panel'
-
-export const metadata: Metadata = { title: 'Calc' }
 
 type Props = { params: Promise<{ projectId: string; calcId: string }>; searchParams: Promise<{ view?: string }> }
 
@@ -32,84 +31,140 @@ async function workspace(...args: Parameters<typeof getCalcWorkspace>) {
   }
 }
 
+export async function generateMetadata({ params }: Props): Promise<Metadata> {
+  const { projectId, calcId } = await params
+  const { user } = await loadProjectContext(projectId)
+  const { calc } = await workspace(user, projectId, calcId)
+  return { title: `${calc.number} ${calc.title}` }
+}
+
 export default async function CalcPage({ params, searchParams }: Props) {
   const [{ projectId, calcId }, { view }] = await Promise.all([params, searchParams])
   const { user, project, actor } = await loadProjectContext(projectId)
-  const { calc, revisions, shown, pkg, remarks, pending, materials } = await workspace(user, projectId, calcId, view)
+  const w = await workspace(user, projectId, calcId, view)
+  const { calc, revisions, shown, pkg } = w
   const r = await reports()
   const html = pkg ? await r.renderWebHtml(pkg) : null
+  const outline = pkg ? r.stepOutline(pkg) : []
+  const byId = new Map(outline.map((s) => [s.id, s]))
   const base = `/projects/${projectId}/calcs/${calcId}`
-  // Steps are numbered in the order the package shows them; read that order from the rendered anchors.
-  const order = html ? [...html.matchAll(/id="step-([^"]+)"/g)].map((m) => m[1]) : []
-  const numberOf = new Map(order.map((id, i) => [id, i + 1]))
-  const titles = new Map(((shown?.result as CalcResult | null)?.steps ?? []).map((s) => [s.id, s.title]))
-  const calcType = calc.calcType as CalcType
+  const iso = (d: Date) => d.toISOString()
+  const remarks = w.remarks.map((rm) => ({
+    id: rm.id,
+    stepId: rm.stepId,
+    severity: rm.severity,
+    status: rm.status,
+    text: rm.text,
+    author: rm.author,
+    carried: !!rm.carriedFromId,
+    stepNumber: rm.stepId ? (byId.get(rm.stepId)?.number ?? null) : null,
+    stepTitle: rm.stepId ? (byId.get(rm.stepId)?.title ?? null) : null,
+    replies: rm.replies.map((x) => ({ ...x, createdAt: iso(x.createdAt) })),
+  }))
+  const inCheck = shown?.state === 'in-check'
+  const namedChecker = !shown?.assignedCheckerId || shown.assignedCheckerId === user.id
 
   return (
-    <div className="flex flex-col gap-4">
-      <div>
-        <Link href={`/projects/${projectId}`} className="font-mono text-xs text-accent underline">
-          {project.code} register
-        </Link>
-        <h1 className="h1">
-          <span className="font-mono">{calc.number}</span> {calc.title}
-        </h1>
-        <div className="mt-1 flex items-center gap-2 text-xs text-ink/60">
-          {CALC_TYPE_LABELS[calcType]} <StateBadge state={calc.state} />
+    <ReviewProvider>
+      <div className="flex flex-col gap-4">
+        <div>
+          <Link href={`/projects/${projectId}`} className="font-mono text-xs text-accent underline">
+            {project.code} register
+          </Link>
+          <h1 className="h1">
+            <span className="font-mono">{calc.number}</span> {calc.title}
+          </h1>
+          <div className="mt-1 flex flex-wrap items-center gap-3 text-xs text-ink/70">
+            {mechanismLabel(calc.calcType)} <StateBadge state={calc.state} />
+            {revisions.length > 1 && (
+              <Link className="text-accent underline" href={`${base}/compare?from=${revisions[1].id}&to=${revisions[0].id}`}>
+                Compare revisions
+              </Link>
+            )}
+            <Link className="text-accent underline" href={`${base}/audit`}>
+              Audit trail
+            </Link>
+          </div>
         </div>
-      </div>
-      <div className="grid items-start gap-4 lg:grid-cols-[24rem_1fr]">
-        <div className="flex flex-col gap-4">
-          <RevisionsPanel
-            projectId={projectId}
-            calcId={calcId}
-            shownId={shown?.id ?? null}
-            canSave={can(actor, 'calc.submit')}
-            allowed={TRANSITIONS.filter((t) => can(actor, t.permission)).map((t) => t.action)}
-            revisions={revisions.map((r) => ({ id: r.id, label: r.label, state: r.state, contentHash: r.contentHash, pdfHash: r.pdfHash, createdAt: r.createdAt.toISOString() }))}
-          />
-          {shown && (
-            <RemarksPanel
+        <div className="grid items-start gap-4 lg:grid-cols-[24rem_1fr]">
+          <div className="flex flex-col gap-4">
+            <RevisionsPanel
               projectId={projectId}
               calcId={calcId}
-              revisionId={shown.id}
-              revisionLabel={shown.label}
-              steps={order.map((id, i) => ({ id, number: i + 1, title: titles.get(id) ?? id }))}
-              remarks={remarks.map((rm) => ({ ...rm, stepNumber: numberOf.get(rm.stepId) ?? null }))}
-              canRemark={can(actor, 'remark.create') && shown.state === 'in-check'}
-              canRespond={can(actor, 'remark.respond')}
+              calcNumber={calc.number}
+              canSave={can(actor, 'calc.submit')}
+              allowed={TRANSITIONS.filter((t) => can(actor, t.permission)).map((t) => t.action)}
+              checkers={w.checkers}
+              approvers={w.approvers}
+              workingFails={w.workingFails}
+              revisions={revisions.map((rev) => ({
+                id: rev.id,
+                label: rev.label,
+                state: rev.state,
+                reason: rev.reason,
+                submittedFailing: rev.submittedFailing,
+                contentHash: rev.contentHash,
+                pdfHash: rev.pdfHash,
+                createdAt: iso(rev.createdAt),
+                verificationCode: rev.verificationCode,
+                assignedChecker: rev.assignedChecker,
+                assignedApprover: rev.assignedApprover,
+                openRemarks: rev.openRemarks,
+                memoryValues: rev.memoryValues.map((m) => ({ key: m.key, source: m.source })),
+              }))}
             />
-          )}
-          <InputsForm
-            projectId={projectId}
-            calcId={calcId}
-            calcType={calcType}
-            initial={(calc.draftInputs ?? defaultCalcInputs(calcType)) as Parameters<typeof InputsForm>[0]['initial']}
-            materials={[...Object.keys(MATERIALS), ...materials.map((m) => m.name)]}
-            editable={can(actor, 'calc.edit')}
-          />
-          {can(actor, 'calc.edit') && <AttachmentsForm projectId={projectId} calcId={calcId} pending={pending.map((a) => ({ id: a.id, name: a.name, size: a.size }))} />}
-        </div>
-        <section className="panel min-w-0 p-0" aria-label="Calc package">
-          <nav className="flex flex-wrap gap-1 border-b border-rule px-3 py-2 text-xs">
-            <Link href={`${base}?view=working`} className={`rounded px-2 py-1 ${shown ? 'hover:bg-paper' : 'bg-accent text-white'}`}>
-              Working copy
-            </Link>
-            {revisions.map((rev) => (
-              <Link key={rev.id} href={`${base}?view=${rev.id}`} className={`rounded px-2 py-1 ${shown?.id === rev.id ? 'bg-accent text-white' : 'hover:bg-paper'}`}>
-                Rev {rev.label}
+            {shown && (
+              <RemarksPanel
+                projectId={projectId}
+                calcId={calcId}
+                revisionId={shown.id}
+                revisionLabel={shown.label}
+                remarks={remarks}
+                canRemark={can(actor, 'remark.create') && inCheck && namedChecker}
+                canReply={can(actor, 'remark.respond') && !['issued', 'superseded', 'voided'].includes(shown.state)}
+                canClose={can(actor, 'remark.close') && !['issued', 'superseded', 'voided'].includes(shown.state)}
+              />
+            )}
+            <InputsForm
+              projectId={projectId}
+              calcId={calcId}
+              calcType={calc.calcType}
+              initial={(calc.draftInputs ?? defaultCalcInputs(calc.calcType)) as Parameters<typeof InputsForm>[0]['initial']}
+              materials={[...Object.keys(MATERIALS), ...w.materials.map((m) => m.name)]}
+              editable={can(actor, 'calc.edit')}
+            />
+            {can(actor, 'calc.edit') && <AttachmentsForm projectId={projectId} calcId={calcId} pending={w.pending.map((a) => ({ id: a.id, name: a.name, size: a.size }))} />}
+          </div>
+          <section className="panel min-w-0 p-0" aria-label="Calc package">
+            <nav className="flex flex-wrap gap-1 border-b border-rule px-3 py-2 text-xs" aria-label="Package shown">
+              <Link href={`${base}?view=working`} className={`rounded px-2 py-1 ${shown ? 'hover:bg-paper' : 'bg-accent text-white'}`} aria-current={shown ? undefined : 'page'}>
+                Working inputs (unsaved)
               </Link>
-            ))}
-          </nav>
-          {html ? (
-            <div className="inverso-report px-6 py-4" dangerouslySetInnerHTML={{ __html: html }} />
-          ) : (
-            <p role="alert" className="m-4 rounded bg-fail-soft p-3 text-fail">
-              The working inputs have errors; fix them in the form to see the package.
-            </p>
-          )}
-        </section>
+              {revisions.map((rev) => (
+                <Link key={rev.id} href={`${base}?view=${rev.id}`} className={`rounded px-2 py-1 ${shown?.id === rev.id ? 'bg-accent text-white' : 'hover:bg-paper'}`} aria-current={shown?.id === rev.id ? 'page' : undefined}>
+                  Rev {rev.label}
+                </Link>
+              ))}
+            </nav>
+            {html ? (
+              <PackageView
+                html={html}
+                projectId={projectId}
+                calcId={calcId}
+                revisionId={shown?.id ?? null}
+                remarks={remarks}
+                ticks={w.ticks.map((t) => ({ stepId: t.stepId, by: t.by, at: iso(t.at) }))}
+                canRemark={!!shown && can(actor, 'remark.create') && inCheck && namedChecker}
+                canTick={!!shown && can(actor, 'calc.check') && inCheck && namedChecker}
+              />
+            ) : (
+              <p role="alert" className="m-4 rounded bg-fail-soft p-3 text-fail">
+                The working inputs have errors; fix them in the form to see the package.
+              </p>
+            )}
+          </section>
+        </div>
       </div>
-    </div>
+    </ReviewProvider>
   )
 }

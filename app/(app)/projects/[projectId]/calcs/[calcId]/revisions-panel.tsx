@@ -1,75 +1,253 @@
 'use client'
 
 import { useRouter } from 'next/navigation'
-import { useState, useTransition } from 'react'
-import { FormMessage } from '@/app/_components/form'
+import { useId, useRef, useState, useTransition } from 'react'
+import { FieldError, FormMessage } from '@/app/_components/form'
 import { StateBadge } from '@/app/_components/state-badge'
 import type { ActionState } from '@/app/_lib/action'
-import { transitionsFrom, type RevisionState, type TransitionAction } from '@/lib/review/workflow'
+import { transitionsFrom, type RevisionState, type TransitionAction, type TransitionSpec } from '@/lib/review/workflow'
 import { saveRevisionAction, transitionAction } from './actions'
 
-interface RevisionRow {
+export interface RevisionRow {
   id: string
   label: string
   state: RevisionState
+  reason: string | null
+  submittedFailing: boolean
   contentHash: string | null
   pdfHash: string | null
   createdAt: string
+  verificationCode: string | null
+  assignedChecker: string | null
+  assignedApprover: string | null
+  openRemarks: { mustResolve: number; any: number }
+  /** "From memory" material values not yet confirmed (what issuing asks the approver to confirm). */
+  memoryValues: { key: string; source: string }[]
 }
 
-export function RevisionsPanel(props: {
+interface Person {
+  id: string
+  name: string
+}
+
+interface RevisionsPanelProps {
   projectId: string
   calcId: string
-  shownId: string | null
+  calcNumber: string
   canSave: boolean
   /** The workflow actions the viewer's role may take. */
   allowed: TransitionAction[]
   revisions: RevisionRow[]
-}) {
-  const { projectId, calcId, revisions, allowed } = props
+  checkers: Person[]
+  approvers: Person[]
+  /** The working result fails a check: submitting asks for confirmation. */
+  workingFails: string | null
+}
+
+function useRun() {
   const router = useRouter()
   const [state, setState] = useState<ActionState>({})
   const [pending, start] = useTransition()
-  const run = (fn: () => Promise<ActionState>) =>
+  const run = (fn: () => Promise<ActionState>, after?: () => void) =>
     start(async () => {
       const result = await fn()
       setState(result)
-      if (result.ok) router.refresh()
+      if (result.ok) {
+        after?.()
+        router.refresh()
+      }
     })
-  const pdf = (id: string, paper: string) => `/api/v1/projects/${projectId}/calcs/${calcId}/revisions/${id}/pdf?paper=${paper}`
+  return { state, pending, run }
+}
 
+/** Submitting the working inputs: reason, the checker and approver named, a failing calc confirmed. */
+function SubmitForm(props: RevisionsPanelProps & { onDone: () => void }) {
+  const { state, pending, run } = useRun()
+  const id = useId()
+  const [confirm, setConfirm] = useState(false)
+  const form = useRef<HTMLFormElement>(null)
+  const submit = (e: React.FormEvent) => {
+    e.preventDefault()
+    const fd = new FormData(form.current!)
+    const opts = {
+      reason: String(fd.get('reason') ?? ''),
+      checkerId: String(fd.get('checkerId') ?? '') || undefined,
+      approverId: String(fd.get('approverId') ?? '') || undefined,
+      confirmFailing: confirm,
+    }
+    run(() => saveRevisionAction(props.projectId, props.calcId, opts), props.onDone)
+  }
+  const err = state.fieldErrors ?? {}
+  return (
+    <form ref={form} onSubmit={submit} className="flex flex-col gap-2 rounded border border-accent/40 bg-accent-soft/40 p-3" aria-label="Save a revision for check">
+      <FormMessage state={state} />
+      <label className="label" htmlFor={`${id}-reason`}>
+        Why this revision (shown in the history)
+      </label>
+      <input id={`${id}-reason`} name="reason" className="field" required maxLength={500} placeholder="e.g. stroke raised to 140 mm for the CE-40 B model" />
+      <label className="label" htmlFor={`${id}-checker`}>
+        Checker
+      </label>
+      <select id={`${id}-checker`} name="checkerId" className="field" defaultValue={props.checkers[0]?.id ?? ''} aria-invalid={err.checkerId ? true : undefined}>
+        {props.checkers.length !== 1 && <option value="">Any checker of the project</option>}
+        {props.checkers.map((p) => (
+          <option key={p.id} value={p.id}>
+            {p.name}
+          </option>
+        ))}
+      </select>
+      <FieldError message={err.checkerId} />
+      <label className="label" htmlFor={`${id}-approver`}>
+        Approver
+      </label>
+      <select id={`${id}-approver`} name="approverId" className="field" defaultValue={props.approvers[0]?.id ?? ''} aria-invalid={err.approverId ? true : undefined}>
+        {props.approvers.length !== 1 && <option value="">Any approver of the project</option>}
+        {props.approvers.map((p) => (
+          <option key={p.id} value={p.id}>
+            {p.name}
+          </option>
+        ))}
+      </select>
+      <FieldError message={err.approverId} />
+      {props.workingFails && (
+        <label className="flex items-start gap-2 rounded bg-fail-soft p-2 text-sm text-fail">
+          <input type="checkbox" checked={confirm} onChange={(e) => setConfirm(e.target.checked)} className="mt-1" />
+          <span>
+            The calc fails: {props.workingFails}. Submit it anyway; the revision will record that it was submitted failing.
+          </span>
+        </label>
+      )}
+      <div className="flex gap-2">
+        <button type="submit" className="btn" disabled={pending || (!!props.workingFails && !confirm)}>
+          {pending ? 'Running the calc and writing the package…' : 'Save revision and send to check'}
+        </button>
+        <button type="button" className="btn-quiet" onClick={props.onDone}>
+          Cancel
+        </button>
+      </div>
+    </form>
+  )
+}
+
+/** A transition, confirmed: what will be signed, the password, the reason, the material values to confirm. */
+function TransitionForm({ t, rev, props, onDone }: { t: TransitionSpec; rev: RevisionRow; props: RevisionsPanelProps; onDone: () => void }) {
+  const { state, pending, run } = useRun()
+  const id = useId()
+  const [materials, setMaterials] = useState(false)
+  const form = useRef<HTMLFormElement>(null)
+  const needsMaterials = t.to === 'issued' && rev.memoryValues.length > 0
+  const blocked = t.blockedBy === 'must-resolve' ? rev.openRemarks.mustResolve : t.blockedBy === 'any' ? rev.openRemarks.any : 0
+  const submit = (e: React.FormEvent) => {
+    e.preventDefault()
+    const fd = new FormData(form.current!)
+    const opts = {
+      password: t.password ? String(fd.get('password') ?? '') : undefined,
+      reason: t.reason ? String(fd.get('reason') ?? '') : undefined,
+      confirmMaterials: needsMaterials && materials ? (true as const) : undefined,
+    }
+    run(() => transitionAction(props.projectId, props.calcId, rev.id, t.action, opts), onDone)
+  }
+  const err = state.fieldErrors ?? {}
+  return (
+    <form ref={form} onSubmit={submit} className="flex flex-col gap-2 rounded border border-accent/40 bg-accent-soft/40 p-3" aria-label={t.button}>
+      <p className="text-sm font-semibold">{t.confirm}</p>
+      <dl className="grid grid-cols-[7rem_1fr] gap-x-2 text-xs">
+        <dt className="text-ink/70">Calc</dt>
+        <dd>
+          {props.calcNumber} rev {rev.label}
+        </dd>
+        <dt className="text-ink/70">Content SHA-256</dt>
+        <dd className="font-mono break-all">{rev.contentHash}</dd>
+      </dl>
+      {blocked > 0 && (
+        <p role="alert" className="rounded bg-fail-soft p-2 text-sm text-fail">
+          {blocked} {t.blockedBy === 'must-resolve' ? 'remark(s) that must be resolved' : 'remark(s)'} still open: close them first.
+        </p>
+      )}
+      {t.reason && (
+        <>
+          <label className="label" htmlFor={`${id}-reason`}>
+            Reason
+          </label>
+          <textarea id={`${id}-reason`} name="reason" rows={2} className="field" aria-invalid={err.reason ? true : undefined} />
+          <FieldError message={err.reason} />
+        </>
+      )}
+      {needsMaterials && (
+        <fieldset className="rounded border border-caution bg-caution-soft p-2 text-xs">
+          <legend className="px-1 font-semibold">Material values marked “from memory”</legend>
+          <ul className="list-disc pl-4">
+            {rev.memoryValues.map((m) => (
+              <li key={m.key}>
+                <span className="font-mono">{m.key}</span>: {m.source}
+              </li>
+            ))}
+          </ul>
+          <label className="mt-1 flex items-start gap-2">
+            <input type="checkbox" checked={materials} onChange={(e) => setMaterials(e.target.checked)} className="mt-0.5" />I checked each value against its standard (recorded with my name).
+          </label>
+        </fieldset>
+      )}
+      {t.password && (
+        <>
+          <label className="label" htmlFor={`${id}-password`}>
+            Your password (to sign)
+          </label>
+          <input id={`${id}-password`} name="password" type="password" autoComplete="current-password" className="field" aria-invalid={err.password ? true : undefined} />
+          <FieldError message={err.password} />
+        </>
+      )}
+      <FormMessage state={state} />
+      <div className="flex gap-2">
+        <button type="submit" className="btn" disabled={pending || blocked > 0 || (needsMaterials && !materials)}>
+          {pending ? 'Signing…' : t.button}
+        </button>
+        <button type="button" className="btn-quiet" onClick={onDone}>
+          Cancel
+        </button>
+      </div>
+    </form>
+  )
+}
+
+export function RevisionsPanel(props: RevisionsPanelProps) {
+  const { projectId, calcId, revisions, allowed } = props
+  const [open, setOpen] = useState<string | null>(null)
+  const pdf = (id: string, paper: string) => `/api/v1/projects/${projectId}/calcs/${calcId}/revisions/${id}/pdf?paper=${paper}`
   return (
     <section className="panel flex flex-col gap-3 p-4" data-testid="revisions">
       <div className="flex items-center justify-between">
         <h2 className="h2">Revisions</h2>
-        {props.canSave && (
-          <button type="button" className="btn" disabled={pending} onClick={() => run(() => saveRevisionAction(projectId, calcId))}>
-            {pending ? 'Working…' : 'Save revision for check'}
+        {props.canSave && open !== 'submit' && (
+          <button type="button" className="btn" onClick={() => setOpen('submit')}>
+            Save revision for check
           </button>
         )}
       </div>
-      <FormMessage state={state} />
-      {state.fieldErrors && (
-        <ul className="list-disc pl-4 text-xs text-fail">
-          {Object.entries(state.fieldErrors).map(([k, v]) => (
-            <li key={k}>
-              <span className="font-mono">{k}</span>: {v}
-            </li>
-          ))}
-        </ul>
-      )}
-      {revisions.length === 0 && <p className="text-ink/60">No revision yet. Save one when the working copy is ready for check.</p>}
+      {open === 'submit' && <SubmitForm {...props} onDone={() => setOpen(null)} />}
+      {revisions.length === 0 && <p className="text-ink/70">No revision yet. Save one when the working inputs are ready for check.</p>}
       <ul className="flex flex-col divide-y divide-rule">
         {revisions.map((r) => {
           const next = transitionsFrom(r.state).filter((t) => allowed.includes(t.action))
           return (
-            <li key={r.id} className="flex flex-col gap-1 py-2">
+            <li key={r.id} className="flex flex-col gap-1 py-2" data-testid={`revision-${r.label}`}>
               <div className="flex items-center gap-2">
                 <span className="font-mono font-semibold">Rev {r.label}</span>
                 <StateBadge state={r.state} />
-                <span className="ml-auto text-xs text-ink/60">{r.createdAt.slice(0, 10)}</span>
+                <span className="ml-auto text-xs text-ink/70">{r.createdAt.slice(0, 10)}</span>
               </div>
-              <div className="font-mono text-[10px] text-ink/50" title="SHA-256 of canonical inputs + result / of the stored PDF">
+              {r.reason && <p className="text-xs">{r.reason}</p>}
+              {r.submittedFailing && <p className="text-xs font-semibold text-fail">Submitted with a failing check.</p>}
+              <p className="text-xs text-ink/70">
+                Checker {r.assignedChecker ?? 'any'} · approver {r.assignedApprover ?? 'any'}
+                {r.openRemarks.any > 0 && ` · ${r.openRemarks.any} open remark${r.openRemarks.any === 1 ? '' : 's'}`}
+              </p>
+              {r.verificationCode && (
+                <p className="text-xs">
+                  Verification code <span className="font-mono font-semibold">{r.verificationCode}</span>
+                </p>
+              )}
+              <div className="font-mono text-[10px] text-ink/70" title="SHA-256 of canonical inputs + result / of the stored PDF">
                 content {r.contentHash?.slice(0, 16)}… · pdf {r.pdfHash?.slice(0, 16)}…
               </div>
               <div className="flex flex-wrap items-center gap-2">
@@ -79,18 +257,15 @@ export function RevisionsPanel(props: {
                 <a className="text-xs text-accent underline" href={pdf(r.id, 'LETTER')}>
                   PDF (US Letter)
                 </a>
-                {next.map((t) => (
-                  <button
-                    key={t.action}
-                    type="button"
-                    className="btn-quiet ml-auto"
-                    disabled={pending}
-                    onClick={() => window.confirm(t.confirm) && run(() => transitionAction(projectId, calcId, r.id, t.action))}
-                  >
-                    {t.button}
-                  </button>
-                ))}
+                <span className="ml-auto flex flex-wrap gap-1">
+                  {next.map((t) => (
+                    <button key={t.action} type="button" className="btn-quiet" onClick={() => setOpen(`${r.id}:${t.action}`)} aria-expanded={open === `${r.id}:${t.action}`}>
+                      {t.button}
+                    </button>
+                  ))}
+                </span>
               </div>
+              {next.map((t) => open === `${r.id}:${t.action}` && <TransitionForm key={t.action} t={t} rev={r} props={props} onDone={() => setOpen(null)} />)}
             </li>
           )
         })}
