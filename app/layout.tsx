@@ -1,4 +1,5 @@
 import type { Metadata } from 'next'
+import { connection } from 'next/server'
 import type { ReactNode } from 'react'
 import { GENERAL_CAUTION } from '@/lib/cautions'
 import { notoMono, notoSans } from './fonts'
@@ -9,7 +10,9 @@ export const metadata: Metadata = {
   description: 'Straight-line linkage calculations, checked and signed.',
 }
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  // Rendered per request, so Next can put this request's CSP nonce (proxy.ts) on its scripts.
+  await connection()
   return (
     <html lang="en" className={`${notoSans.variable} ${notoMono.variable}`}>
       <body className="flex min-h-screen flex-col font-sans text-sm antialiased">

@@ -7,6 +7,8 @@ import * as schema from './schema'
 export const DEFAULT_DATABASE_URL = 'file:./data/inverso.db'
 
 export type Db = LibSQLDatabase<typeof schema>
+/** The `tx` a `db.transaction(async (tx) => …)` callback gets. */
+export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0]
 
 export function databaseUrl(): string {
   return process.env.DATABASE_URL || DEFAULT_DATABASE_URL

@@ -16,7 +16,7 @@ export function errorResponse(err: unknown): Response {
     return Response.json(body, { status: HTTP_STATUS[err.code], headers: { 'Cache-Control': 'private, no-store' } })
   }
   console.error('[api]', err)
-  return Response.json({ error: { code: 'server_error', message: 'Internal error; nothing more is known. Tell an administrator.' } }, { status: 500 })
+  return Response.json({ error: { code: 'server_error', message: 'Internal error; nothing more is known. Tell an administrator.' } }, { status: 500, headers: { 'Cache-Control': 'private, no-store' } })
 }
 
 /** `Authorization: Bearer <token>` (a personal API token), else the session cookie. */
@@ -57,6 +57,29 @@ export function parseWith<S extends z.ZodType>(schema: S, value: unknown): z.inf
   return parsed.data
 }
 
+const STATE_CHANGING = new Set(['POST', 'PUT', 'PATCH', 'DELETE'])
+
+/**
+ * A state-changing request that names another origin is refused (403): a page elsewhere can make
+ * a browser send a form or a `text/plain` POST with the user's cookie, and only the Origin header
+ * tells. Requests without Origin (curl, the CLI, server-to-server with a bearer token) pass; their
+ * body must still be JSON (415 otherwise, in `readRawJson`).
+ */
+export function assertSameOrigin(req: Request): void {
+  if (!STATE_CHANGING.has(req.method.toUpperCase())) return
+  const origin = req.headers.get('origin')
+  if (origin === null) return
+  const allowed = new Set<string>()
+  if (process.env.APP_URL) allowed.add(new URL(process.env.APP_URL).origin)
+  else {
+    const url = new URL(req.url)
+    allowed.add(url.origin)
+    const host = req.headers.get('x-forwarded-host') ?? req.headers.get('host')
+    if (host) allowed.add(`${req.headers.get('x-forwarded-proto') ?? url.protocol.replace(':', '')}://${host}`)
+  }
+  if (!allowed.has(origin)) throw new AppError('forbidden', 'Requests from another site are refused.')
+}
+
 type Handler<P> = (ctx: { req: Request; caller: Caller | null; params: P }) => Promise<Response | object>
 
 /**
@@ -66,6 +89,7 @@ type Handler<P> = (ctx: { req: Request; caller: Caller | null; params: P }) => P
 export function apiRoute<P>(handler: Handler<P>) {
   return async (req: Request, ctx: { params: Promise<P> }): Promise<Response> => {
     try {
+      assertSameOrigin(req)
       const caller = await callerOf(req)
       const out = await handler({ req, caller, params: await ctx.params })
       if (out instanceof Response) return out

@@ -1,8 +1,9 @@
 import 'server-only'
-import { cookies } from 'next/headers'
+import { cookies, headers } from 'next/headers'
 import { redirect } from 'next/navigation'
 import { cache } from 'react'
 import { lucia, type SessionUser } from '@/server/auth/lucia'
+import { clientAddress } from '@/server/auth/client-address'
 import { AppError } from '@/lib/errors'
 
 /** The signed-in user for this request, or null. Refreshes the cookie when lucia extends the session. */
@@ -42,4 +43,18 @@ export async function requireUser(): Promise<SessionUser> {
 
 export async function setSessionCookie(cookie: { name: string; value: string; attributes: object }) {
   ;(await cookies()).set(cookie.name, cookie.value, cookie.attributes)
+}
+
+/** The session id the browser sent, if any (to end it when the browser signs in again). */
+export async function currentSessionId(): Promise<string | undefined> {
+  return (await cookies()).get(lucia.sessionCookieName)?.value
+}
+
+/** Where this request comes from, for the per-source limits (see server/auth/client-address.ts). */
+export async function requestSource(): Promise<string> {
+  return clientAddress(await headers())
+}
+
+export async function readCookie(name: string): Promise<string | undefined> {
+  return (await cookies()).get(name)?.value
 }
