@@ -17,6 +17,19 @@ const CLAUSE: Record<string, RegExp> = {
   allowable: /^(Shigley's Mechanical Engineering Design: |plain mechanics: |two shear planes of length a; |EN 1993-1-8:2005 Fig\. 3\.11 |single shear: couple)/,
 }
 
+/** The unit of each check: forces in N, moments in N·mm, stresses in MPa, dimensions in mm, interactions '—'. */
+const UNIT: Record<string, Record<string, string>> = {
+  en1993: {
+    shear: 'N', bearing: 'N', bending: 'N·mm', 'shear-bending': '—', 'bearing-ser': 'N', 'contact-ser': 'MPa', 'bending-ser': 'N·mm',
+    'eye-end': 'mm', 'eye-side': 'mm', 'eye-thickness': 'mm', 'eye-hole': 'mm', 'net-tension': 'N', axial: '—', 'axial-bending': '—', buckling: 'N',
+  },
+  aisc360: {
+    shear: 'N', bearing: 'N', bending: 'N·mm', 'tensile-rupture': 'N', 'shear-rupture': 'N', 'gross-yielding': 'N',
+    'd52-extension': 'mm', 'd52-width': 'mm', 'd52-hole': 'mm', buckling: 'N', 'axial-bending': '—',
+  },
+  allowable: { shear: 'MPa', bearing: 'MPa', bending: 'MPa', 'net-tension': 'MPa', 'tear-out': 'MPa', buckling: 'N', axial: 'MPa', 'axial-bending': 'MPa' },
+}
+
 const prints = (tex: string | undefined, v: number) => printedNumbers(tex ?? '').some((p) => samePrinted(p, v))
 
 function verify(kind: string, r: { checks: Item[]; steps: StepLike[] }): void {
@@ -30,6 +43,7 @@ function verify(kind: string, r: { checks: Item[]; steps: StepLike[] }): void {
     expect(c.clause.trim().length, c.stepId).toBeGreaterThan(10)
     expect(c.clause, c.stepId).toMatch(CLAUSE[kind])
     expect(step!.source).toBe(c.clause)
+    expect(c.unit, c.stepId).toBe(UNIT[kind][c.stepId.split('.').pop()!])
     if (!(c.unit === '—' && c.capacity === 1)) expect(prints(tex, c.capacity), `capacity ${c.capacity} not printed in ${where}`).toBe(true)
     expect(prints(tex, c.demand) || prints(force!.substituted, c.demand), `demand ${c.demand} not printed in ${where}`).toBe(true)
     expect(c.utilisation).toBeCloseTo(c.demand / c.capacity, 12)
