@@ -1,9 +1,10 @@
 import { randomBytes, randomUUID } from 'node:crypto'
-import { and, desc, eq, isNull } from 'drizzle-orm'
+import { and, desc, eq, isNull, lt, or } from 'drizzle-orm'
 import { db } from '@/db'
 import { audit } from '@/db/audit'
 import { apiTokens, users } from '@/db/schema'
 import { AppError } from '@/lib/errors'
+import { stripControl } from '@/lib/schemas/clean-text'
 import { requireCaller, type Caller } from '../access'
 import { hashToken } from './tokens'
 
@@ -17,7 +18,7 @@ function newApiToken() {
 
 /** Issues a token for `userId` (the caller themself, or an operator on the server); the token is returned once. */
 async function issue(userId: string, name: string) {
-  const label = name.trim()
+  const label = stripControl(name).trim()
   if (label.length < 1 || label.length > 80) throw new AppError('invalid', 'Give the token a name.', { name: 'Give the token a name of at most 80 characters.' })
   const { token, tokenHash, prefix } = newApiToken()
   const id = randomUUID()
@@ -60,11 +61,15 @@ export async function revokeApiToken(caller: Caller | null, tokenId: string) {
 export async function callerForApiToken(token: string): Promise<Caller | null> {
   if (!token.startsWith(PREFIX)) return null
   const [row] = await db
-    .select({ tokenId: apiTokens.id, id: users.id, email: users.email, name: users.name, isAdmin: users.isAdmin, active: users.passwordHash })
+    .select({ tokenId: apiTokens.id, lastUsedAt: apiTokens.lastUsedAt, id: users.id, email: users.email, name: users.name, isAdmin: users.isAdmin, active: users.passwordHash })
     .from(apiTokens)
     .innerJoin(users, eq(users.id, apiTokens.userId))
     .where(and(eq(apiTokens.tokenHash, hashToken(token)), isNull(apiTokens.revokedAt)))
   if (!row?.active) return null
-  await db.update(apiTokens).set({ lastUsedAt: new Date() }).where(eq(apiTokens.id, row.tokenId))
+  // "Last used" to the minute: a write on every API call would queue every read behind SQLite's writer.
+  const now = Date.now()
+  if (!row.lastUsedAt || now - row.lastUsedAt.getTime() > 60_000) {
+    await db.update(apiTokens).set({ lastUsedAt: new Date(now) }).where(and(eq(apiTokens.id, row.tokenId), or(isNull(apiTokens.lastUsedAt), lt(apiTokens.lastUsedAt, new Date(now - 60_000)))))
+  }
   return { id: row.id, email: row.email, name: row.name, isAdmin: row.isAdmin }
 }

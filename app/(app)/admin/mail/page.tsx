@@ -3,6 +3,7 @@ import { notFound } from 'next/navigation'
 import { requirePageUser } from '@/app/_lib/session'
 import { AppError } from '@/lib/errors'
 import { caughtMail } from '@/server/mail-inbox'
+import { outboxProblems } from '@/server/mail/outbox'
 
 export const metadata: Metadata = { title: 'Caught mail' }
 export const dynamic = 'force-dynamic'
@@ -17,8 +18,23 @@ export default async function MailPage() {
     if (err instanceof AppError) notFound()
     throw err
   }
+  // Mail the outbox could not deliver yet (retrying) or gave up on: kept, never lost.
+  const problems = await outboxProblems(user)
   return (
     <div className="flex flex-col gap-4">
+      {problems.length > 0 && (
+        <section className="panel p-4" data-testid="outbox-problems">
+          <h2 className="font-semibold">Mail not delivered</h2>
+          <ul className="mt-2 flex flex-col gap-1 text-xs">
+            {problems.map((p) => (
+              <li key={p.id}>
+                {p.failedAt ? 'Given up' : 'Retrying'} after {p.attempts} tries: “{p.subject}” to {p.to}
+                {p.lastError ? ` — ${p.lastError}` : ''}
+              </li>
+            ))}
+          </ul>
+        </section>
+      )}
       <h1 className="h1">Caught mail</h1>
       <p className="text-ink/70">Messages the local fake SMTP server received. Nothing here left this machine.</p>
       {mails.length === 0 && <p className="panel p-4 text-ink/60">No mail caught yet.</p>}
