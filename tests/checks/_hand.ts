@@ -16,6 +16,8 @@ export const HAND_MATERIALS = {
 
 export interface Item {
   stepId: string
+  component: string
+  basis: string
   check: string
   clause: string
   demand: number
@@ -28,6 +30,7 @@ export interface Item {
 }
 export interface StepLike {
   id: string
+  title?: string
   substituted?: string
   formula?: string
   source?: string

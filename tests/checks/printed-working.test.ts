@@ -32,14 +32,24 @@ const UNIT: Record<string, Record<string, string>> = {
 
 const prints = (tex: string | undefined, v: number) => printedNumbers(tex ?? '').some((p) => samePrinted(p, v))
 
-function verify(kind: string, r: { checks: Item[]; steps: StepLike[] }): void {
+function verify(kind: string, r: { checks: Item[]; steps: StepLike[]; cautions: string[] }): void {
   const force = r.steps.find((s) => s.id.endsWith('.force'))
   expect(force).toBeDefined()
+  // every caution, basis label, title and formula says something
+  expect(r.cautions.length).toBeGreaterThanOrEqual(2)
+  for (const c of r.cautions) expect(c.length).toBeGreaterThan(40)
+  for (const s of r.steps) {
+    expect(s.title!.length, s.id).toBeGreaterThan(12)
+    expect(s.formula!.length, s.id).toBeGreaterThan(4)
+  }
   for (const c of r.checks) {
     const step = r.steps.find((s) => s.id === c.stepId)
     expect(step, c.stepId).toBeDefined()
     const tex = step!.substituted
     const where = `${c.stepId}: ${tex}`
+    expect(c.check.length, c.stepId).toBeGreaterThan(8)
+    expect(step!.title).toBe(`${c.component}: ${c.check}`)
+    expect(c.basis, c.stepId).toMatch(kind === 'en1993' ? /^EN 1993 \(γM0 [\d.]+, γM1 [\d.]+, γM2 [\d.]+, γM6,ser [\d.]+\)$/ : kind === 'aisc360' ? /^AISC 360-16 (LRFD|ASD)$/ : /^allowable stress, FoS [\d.]+$/)
     expect(c.clause.trim().length, c.stepId).toBeGreaterThan(10)
     expect(c.clause, c.stepId).toMatch(CLAUSE[kind])
     expect(step!.source).toBe(c.clause)
