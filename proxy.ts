@@ -40,7 +40,18 @@ export function securityHeaders(nonce: string, opts: { https?: boolean; dev?: bo
   }
 }
 
+/** No request body may be larger (the largest is an appendix upload of 10 MB, plus the form around it). */
+export const MAX_BODY_BYTES = 11 * 1024 * 1024
+
 export function proxy(request: NextRequest) {
+  const length = Number(request.headers.get('content-length') ?? 0)
+  if (length > MAX_BODY_BYTES) {
+    // Refused before anything reads it: a clear 413, not a truncated body that fails later with a 500.
+    return new NextResponse(`The request is larger than ${MAX_BODY_BYTES / 1048576} MB. Appendices may be at most 10 MB.`, {
+      status: 413,
+      headers: { 'Content-Type': 'text/plain; charset=utf-8', 'Cache-Control': 'no-store', 'X-Content-Type-Options': 'nosniff' },
+    })
+  }
   const nonce = Buffer.from(crypto.getRandomValues(new Uint8Array(16))).toString('base64')
   const headers = securityHeaders(nonce, { https: (process.env.APP_URL ?? '').startsWith('https://'), dev: process.env.NODE_ENV === 'development' })
   const requestHeaders = new Headers(request.headers)

@@ -98,3 +98,14 @@ describe('apiRoute', () => {
     }
   })
 })
+
+describe('body size', () => {
+  it('the proxy answers 413 to a body declared larger than the upload limit, before anything reads it', async () => {
+    const { MAX_BODY_BYTES } = await import('@/proxy')
+    const res = proxy(new NextRequest('http://localhost:3000/projects/p/calcs/c', { method: 'POST', headers: { 'content-length': String(50 * 1024 * 1024) } }))
+    expect(res.status).toBe(413)
+    expect(await res.text()).toMatch(/at most 10 MB/)
+    const fine = proxy(new NextRequest('http://localhost:3000/projects/p/calcs/c', { method: 'POST', headers: { 'content-length': String(MAX_BODY_BYTES - 1) } }))
+    expect(fine.status).toBe(200)
+  })
+})
