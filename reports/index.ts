@@ -4,7 +4,8 @@
  * Pure Node: no Next.js, no __dirname; templates and fonts resolve from
  * `rootDir` (default `process.cwd()`).
  */
-export { renderPdf } from './pdf/render'
+export { renderBody, renderPdf } from './pdf/render'
+export { finishPdf } from './pdf/finish'
 export { renderWebHtml, renderWebDocument } from './web/render'
 export { sha256Hex, canonicalJson } from './hash'
 export { formatValue, formatNumber, watermarkFor } from './model/format'

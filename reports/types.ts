@@ -44,11 +44,22 @@ export interface HistoryEntry {
 export interface Remark {
   /** The step the remark is about; null for a remark on the package as a whole. */
   stepId: string | null
+  /** The step's number in this package, when known. */
+  stepNumber?: number | null
   author: string
   role: string
   text: string
   status: string
   date: string
+}
+
+/** What sign-off adds to a package; stamped onto the stored body by finishPdf, never rendered into it. */
+export interface SignOff {
+  /** Every transition of the revision, oldest first, with the server's signature where it was signed. */
+  events: { what: string; by: string; at: string; reason?: string | null; signature?: string | null }[]
+  ticks: { stepId: string; number: number | null; by: string; date: string }[]
+  confirmations: { value: string; by: string; date: string }[]
+  issue?: { approver: string; date: string; contentHash: string; code: string }
 }
 
 export interface InputRow {
@@ -95,6 +106,8 @@ export interface ReportPackage {
   generatedAt: string
   engineVersion: string
   templateVersion: string
+  /** Present once the revision has been submitted: the record of its sign-off. */
+  signOff?: SignOff
 }
 
 export interface RenderOptions {

@@ -2,10 +2,10 @@
 import { databaseUrl, db } from '@/db'
 import { migrateDb } from '@/db/migrate'
 import { localFileStore } from '@/lib/storage'
-import { renderPdf } from '@/reports'
+import { finishPdf, renderBody } from '@/reports'
 import { seedDemo } from '@/server/demo/seed'
 
 await migrateDb(db)
-const seeded = await seedDemo(db, { renderer: { renderPdf }, store: localFileStore() })
+const seeded = await seedDemo(db, { renderer: { renderBody, finishPdf }, store: localFileStore() })
 console.log(`database ${databaseUrl()}: migrated${seeded ? ', demo seeded' : ', demo already present'}`)
 process.exit(0)

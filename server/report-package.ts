@@ -1,12 +1,14 @@
 import { asc, eq, inArray } from 'drizzle-orm'
 import { db } from '@/db'
-import { calcs, projects, revisions, users, type Calc, type Project, type Revision } from '@/db/schema'
+import { calcs, materialConfirmations, projects, revisionEvents, revisions, users, type Calc, type Project, type Revision } from '@/db/schema'
 import { inputRowsOf } from '@/lib/calc/input-rows'
 import { parseCalcInput, type CalcResult } from '@/lib/calc/run'
 import { ENGINE_VERSION } from '@/lib/calc/version'
 import { SEVERITY_LABELS } from '@/lib/review/workflow'
 import { remarksWithThreads } from './remarks'
-import type { CalcType, Paper, ReportPackage } from '@/reports/types'
+import { stepOutline } from '@/reports/model/outline'
+import type { CalcType, Paper, ReportPackage, SignOff } from '@/reports/types'
+import { ticksOf } from './ticks'
 import { TEMPLATE_VERSION } from '@/reports/version'
 
 export { TEMPLATE_VERSION }
@@ -38,12 +40,64 @@ function common(project: Project, calc: Calc, paper: Paper) {
   }
 }
 
+const ACTION_WORDS: Record<string, string> = {
+  submit: 'submitted the revision for check',
+  return: 'returned it to the engineer',
+  resubmit: 'resubmitted it for check',
+  check: 'signed as checker',
+  approve: 'signed as approver',
+  issue: 'issued it',
+  withdraw: 'withdrew it',
+  void: 'voided it',
+}
+
+export interface PendingEvent {
+  action: string
+  by: string
+  at: Date
+  reason?: string | null
+  signature?: string | null
+  /** Material values the approver confirms with this event (issue). */
+  confirms?: string[]
+}
+
+/** The sign-off record of a revision as it stands (plus an event about to be written). */
+async function signOffOf(rev: Revision, stepNumber: (id: string) => number | null, pending?: PendingEvent): Promise<SignOff> {
+  const [events, ticks, confirmations] = await Promise.all([
+    db
+      .select({ action: revisionEvents.action, by: users.name, at: revisionEvents.at, reason: revisionEvents.reason, signature: revisionEvents.signature })
+      .from(revisionEvents)
+      .innerJoin(users, eq(users.id, revisionEvents.userId))
+      .where(eq(revisionEvents.revisionId, rev.id))
+      .orderBy(asc(revisionEvents.at), asc(revisionEvents.id)),
+    ticksOf(rev.id),
+    db
+      .select({ value: materialConfirmations.value, by: users.name, at: materialConfirmations.at })
+      .from(materialConfirmations)
+      .innerJoin(users, eq(users.id, materialConfirmations.userId))
+      .where(eq(materialConfirmations.revisionId, rev.id)),
+  ])
+  const all = pending ? [...events, pending] : events
+  const issued = [...all].reverse().find((e) => e.action === 'issue')
+  return {
+    events: all.map((e) => ({ what: ACTION_WORDS[e.action] ?? e.action, by: e.by, at: e.at.toISOString(), reason: e.reason, signature: e.signature })),
+    ticks: ticks.map((t) => ({ stepId: t.stepId, number: stepNumber(t.stepId), by: t.by, date: day(t.at)! })),
+    confirmations: [...confirmations, ...(pending?.confirms ?? []).map((value) => ({ value, by: pending!.by, at: pending!.at }))]
+      .sort((a, b) => a.value.localeCompare(b.value))
+      .map((c) => ({ value: c.value, by: c.by, date: day(c.at)! })),
+    issue:
+      issued && rev.verificationCode && rev.contentHash
+        ? { approver: issued.by, date: day(issued.at)!, contentHash: rev.contentHash, code: rev.verificationCode }
+        : undefined,
+  }
+}
+
 /**
  * Everything the report pipeline needs for one revision. `rev` may be a row not yet written (a
  * revision about to be saved, or a state change about to be signed), so the PDF is rendered before
  * anything is committed; `others` are the calc's stored revisions as they will stand after it.
  */
-export async function reportPackageOf(rev: Revision, others: Revision[], paper: Paper = 'A4'): Promise<ReportPackage> {
+export async function reportPackageOf(rev: Revision, others: Revision[], paper: Paper = 'A4', pending?: PendingEvent): Promise<ReportPackage> {
   const [calc] = await db.select().from(calcs).where(eq(calcs.id, rev.calcId))
   const [project] = await db.select().from(projects).where(eq(projects.id, calc.projectId))
   const remarks = await remarksWithThreads(rev.id)
@@ -51,6 +105,9 @@ export async function reportPackageOf(rev: Revision, others: Revision[], paper: 
   const parsed = parseCalcInput(rev.inputs)
   if (!parsed.ok) throw new Error(`stored inputs of revision ${rev.label} no longer parse: ${JSON.stringify(parsed.fieldErrors)}`)
   const all = [...others.filter((r) => r.id !== rev.id), rev].sort((a, b) => a.createdAt.getTime() - b.createdAt.getTime())
+  const outline = stepOutline({ calc: { type: calc.calcType }, result: rev.result as CalcResult })
+  const numbers = new Map(outline.map((o) => [o.id, o.number]))
+  const stepNumber = (id: string) => numbers.get(id) ?? null
   return {
     ...common(project, calc, paper),
     revision: {
@@ -62,7 +119,8 @@ export async function reportPackageOf(rev: Revision, others: Revision[], paper: 
     },
     history: historyOf(all),
     remarks: remarks.map((r) => ({
-      stepId: r.stepId ?? '',
+      stepId: r.stepId,
+      stepNumber: r.stepId ? stepNumber(r.stepId) : null,
       author: r.author,
       role: 'checker',
       text: [`[${SEVERITY_LABELS[r.severity]}] ${r.text}`, ...r.replies.map((x) => `${x.author}, ${day(x.createdAt)}: ${x.text}`)].join(' — '),
@@ -71,9 +129,11 @@ export async function reportPackageOf(rev: Revision, others: Revision[], paper: 
     })),
     inputRows: inputRowsOf(parsed.input),
     result: rev.result as CalcResult,
-    generatedAt: rev.frozenAt ?? rev.createdAt.toISOString(),
+    // Fixed at submission: the body is rendered once and every stamp keeps its dates.
+    generatedAt: rev.createdAt.toISOString(),
     engineVersion: rev.engineVersion,
     templateVersion: rev.templateVersion ?? TEMPLATE_VERSION,
+    signOff: await signOffOf(rev, stepNumber, pending),
   }
 }
 

@@ -17,12 +17,15 @@ import { attachmentBytes, pendingAttachmentFiles } from './attachments'
 import { verifyPassword } from './auth/password'
 import { notify } from './notices'
 import { carryOverRemarks, openRemarks } from './remarks'
-import { reportPackageOf, TEMPLATE_VERSION } from './report-package'
+import { reportPackageOf, TEMPLATE_VERSION, type PendingEvent } from './report-package'
 import { signStatement, verificationCodeOf } from './signing'
 
 /** The report pipeline, passed in: the app loads it outside the Next bundle, tests import it directly. */
 export interface ReportRenderer {
-  renderPdf(pkg: ReportPackage): Promise<Uint8Array>
+  /** The package's body (react-pdf): rendered once per revision and stored. */
+  renderBody(pkg: ReportPackage): Promise<Uint8Array>
+  /** Stamps a body for the package's state and signatures and appends the sign-off record and appendices. */
+  finishPdf(body: Uint8Array, pkg: ReportPackage): Promise<Uint8Array>
 }
 
 export interface RevisionDeps {
@@ -45,14 +48,22 @@ async function revisionsOf(calcId: string) {
   return db.select().from(revisions).where(eq(revisions.calcId, calcId))
 }
 
-/** Renders `rev` (stored or about to be) with the other revisions as they will stand, and stores the PDF under its hash. */
-async function renderAndStore(rev: Revision, others: Revision[], deps: RevisionDeps, appendices: { name: string; bytes: Uint8Array }[]) {
-  const pkg = await reportPackageOf(rev, others)
-  const bytes = await deps.renderer.renderPdf({ ...pkg, attachments: appendices })
+/** Where a revision's body is kept: written once when the revision is saved, read by every signature. */
+const bodyKey = (revisionId: string) => `bodies/${revisionId}.pdf`
+
+async function storePdf(bytes: Uint8Array, deps: RevisionDeps) {
   const pdfHash = sha256Hex(bytes)
   const pdfKey = `pdf/${pdfHash}.pdf`
   await deps.store.put(pdfKey, bytes)
   return { pdfKey, pdfHash }
+}
+
+/** The package of `rev` as it will stand (with `pending`, an event about to be written), stamped onto its stored body. */
+async function stamp(rev: Revision, others: Revision[], deps: RevisionDeps, pending?: PendingEvent, paper: Paper = 'A4') {
+  const pkg = await reportPackageOf(rev, others, paper, pending)
+  const full = { ...pkg, attachments: await attachmentBytes(rev.id, deps.store) }
+  const body = paper === 'A4' ? await deps.store.get(bodyKey(rev.id)) : await deps.renderer.renderBody(full)
+  return deps.renderer.finishPdf(body, full)
 }
 
 const superseding = (all: Revision[], states: readonly string[], except: string) =>
@@ -131,7 +142,11 @@ export async function saveRevision(caller: Caller | null, projectId: string, cal
   const replaced = superseding(existing, SUBMIT.supersedes, rev.id)
   const others = [...existing.filter((r) => !replaced.some((x) => x.id === r.id)), ...replaced]
   const appendices = await pendingAttachmentFiles(calc.id, deps.store)
-  const pdf = await renderAndStore(rev, others, deps, appendices.map(({ name, bytes }) => ({ name, bytes })))
+  const submitted: PendingEvent = { action: 'submit', by: who.name, at: now, reason: rev.reason }
+  const pkg = { ...(await reportPackageOf(rev, others, 'A4', submitted)), attachments: appendices.map(({ name, bytes }) => ({ name, bytes })) }
+  const body = await deps.renderer.renderBody(pkg)
+  await deps.store.put(bodyKey(rev.id), body)
+  const pdf = await storePdf(await deps.renderer.finishPdf(body, pkg), deps)
   await db.transaction(async (tx) => {
     await tx.insert(revisions).values({ ...rev, ...pdf })
     if (replaced.length) await tx.update(revisions).set({ state: 'superseded' }).where(inArray(revisions.id, replaced.map((r) => r.id)))
@@ -222,12 +237,13 @@ export async function transitionRevision(
   const signed = t.password ? signStatement({ revision: rev.id, calc: calc.number, label: rev.label, contentHash: rev.contentHash, action: t.action, state: t.to, signer: { id: who.id, name: who.name }, at: now.toISOString() }) : null
   const sign = t.signs === 'checker' ? { checkerId: who.id, checkedAt: now } : t.signs === 'approver' ? { approverId: who.id, approvedAt: now } : {}
   const issue = t.to === 'issued' && signed ? { issuedAt: now, verificationCode: verificationCodeOf(signed.signature) } : {}
-  // A signing step re-renders the record with its signature; the others only change the state.
-  const rerender = t.signs !== null || t.to === 'issued'
-  const change = { ...sign, ...issue, state: t.to, ...(rerender ? { frozenAt: now.toISOString() } : {}) }
+  // The sealed record's PDF never changes (the triggers refuse it): voiding only changes the state.
+  const restamp = !STATES[rev.state].sealed
+  const change = { ...sign, ...issue, state: t.to, ...(restamp ? { frozenAt: now.toISOString() } : {}) }
   const replaced = superseding(all, t.supersedes, rev.id)
   const others = [...all.filter((r) => !replaced.some((x) => x.id === r.id)), ...replaced]
-  const pdf = rerender ? await renderAndStore({ ...rev, ...change }, others, deps, await attachmentBytes(rev.id, deps.store)) : {}
+  const event: PendingEvent = { action: t.action, by: who.name, at: now, reason: opts.reason?.trim() || null, signature: signed?.signature ?? null, confirms: confirmations.map((c) => c.value) }
+  const pdf = restamp ? await storePdf(await stamp({ ...rev, ...change }, others, deps, event), deps) : {}
   await db.transaction(async (tx) => {
     const moved = await tx
       .update(revisions)
@@ -274,13 +290,14 @@ export async function getRevision(caller: Caller | null, projectId: string, calc
   return { calc, revision: rev }
 }
 
-/** States whose stored A4 PDF is the one to hand out; in the others a copy is rendered with the state's watermark. */
+/** States whose stored A4 PDF is the one to hand out; in the others a copy is stamped with the state's watermark. */
 const STORED_PDF_STATES: readonly Revision['state'][] = ['in-check', 'checked', 'approved', 'issued']
 
 /**
  * A revision's PDF. A4 is the stored, hashed record (checked against its hash before sending).
- * US Letter, and a revision no longer current (superseded, voided, returned, withdrawn: so it carries
- * that watermark), are rendered on demand from the same frozen revision; the stored record stays.
+ * A revision no longer current (superseded, voided, returned, withdrawn) is stamped on demand from
+ * its stored body, so it carries that watermark; US Letter is rendered from the same frozen
+ * revision. The stored record stays as it was signed.
  */
 export async function revisionPdf(caller: Caller | null, projectId: string, calcId: string, revisionId: string, paper: Paper, deps: RevisionDeps) {
   const { project, caller: who } = await authoriseCalc(caller, projectId, calcId, 'pdf.download')
@@ -290,8 +307,7 @@ export async function revisionPdf(caller: Caller | null, projectId: string, calc
     bytes = await deps.store.get(rev.pdfKey)
     if (sha256Hex(bytes) !== rev.pdfHash) throw new Error(`stored PDF of revision ${rev.id} does not match its hash`)
   } else {
-    const pkg = await reportPackageOf(rev, await revisionsOf(calc.id), paper)
-    bytes = await deps.renderer.renderPdf({ ...pkg, attachments: await attachmentBytes(rev.id, deps.store) })
+    bytes = await stamp(rev, await revisionsOf(calc.id), deps, undefined, paper)
   }
   if (STATES[rev.state].sealed) {
     await audit({ userId: who.id, action: 'pdf.downloaded', projectId, calcId: calc.id, detail: { revisionId: rev.id, paper, state: rev.state } })

@@ -40,5 +40,5 @@ function bundleMtime(file: string): number {
 
 export async function rendererDeps(): Promise<RevisionDeps> {
   const r = await reports()
-  return { renderer: { renderPdf: (pkg) => r.renderPdf(pkg) }, store: localFileStore() }
+  return { renderer: { renderBody: (pkg) => r.renderBody(pkg), finishPdf: (body, pkg) => r.finishPdf(body, pkg) }, store: localFileStore() }
 }

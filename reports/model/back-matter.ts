@@ -7,7 +7,8 @@ export function backMatterSections(ctx: ReportContext, start: number): BackMatte
     'further-steps': ctx.otherSections.length > 0,
     references: true,
     cautions: true,
-    revisions: ctx.pkg.history.length > 0 || ctx.pkg.remarks.length > 0,
+    // Always present, so section numbers do not move as a revision collects remarks and signatures.
+    revisions: true,
     signatures: true,
   }
   const out: BackMatterSection[] = BACK_MATTER.filter((s) => present[s.id]).map((s, i) => ({ ...s, number: start + i }))

@@ -188,7 +188,8 @@ export function titleView(pkg: ReportPackage, resultHash: string): TitleView {
       ['Project', `${pkg.project.code} — ${pkg.project.name}`],
       ['Client', pkg.project.client],
       ['Calculation', `${pkg.calc.number} (${mechanismLabel(pkg.calc.type)})`],
-      ['Revision', `${pkg.revision.label} — ${STATE_LABEL[pkg.revision.state]}`],
+      // The state is not printed here: it changes as the revision is signed (the title block carries it).
+      ['Revision', pkg.revision.label],
       ['Generated', `${formatDate(pkg.generatedAt)} · engine ${pkg.engineVersion} · template ${pkg.templateVersion}`],
       ['Result SHA-256', resultHash],
     ],

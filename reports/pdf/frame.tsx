@@ -1,15 +1,17 @@
 /**
- * Every PDF page: the title block on top, sign-off strip at the bottom, and the
- * watermark for revisions that must not be relied on. A <Page> holds one
- * section or a few short ones, which keeps react-pdf's layout cost linear.
+ * Every PDF page: the title block on top and the sign-off strip at the bottom.
+ * What changes as a revision moves through sign-off — its state, the checker's
+ * and approver's names and dates, the watermark, the page numbers — is left
+ * out here and stamped by finishPdf, so signing never renders the body again.
+ * A <Page> holds one section or a few short ones, which keeps react-pdf's
+ * layout cost linear.
  */
 import type { ReactNode } from 'react'
 import { Page, Text, View } from '@react-pdf/renderer'
-import { STATE_LABEL, formatDate, watermarkFor } from '../model/format'
+import { formatDate } from '../model/format'
 import { sectionAnchor } from '../model/context'
 import { useReport } from '../model/react-context'
-import { signatories } from '../model/views'
-import { C, HEADER_TOP, MARGIN_X, s } from './styles'
+import { C, FOOTER, HEADER_TOP, MARGIN_X, SIGN_OFF_ROLES, TITLE_CELLS, s } from './styles'
 
 const label = { fontSize: 5.6, color: C.muted, letterSpacing: 0.3, lineHeight: 1.2 }
 const value = { fontSize: 7.4, fontWeight: 700 as const, lineHeight: 1.25 }
@@ -28,11 +30,12 @@ function Header() {
   return (
     <View fixed style={{ position: 'absolute', top: HEADER_TOP, left: MARGIN_X, right: MARGIN_X, height: 46, borderWidth: 0.8, borderColor: C.ink }}>
       <View style={{ flexDirection: 'row', height: 22.4, borderBottomWidth: 0.6, borderBottomColor: C.rule }}>
-        <Cell k="Project" v={`${pkg.project.code} · ${pkg.project.name}`} flex={3} />
-        <Cell k="Calculation" v={pkg.calc.number} flex={1.6} />
-        <Cell k="Revision · state" v={`${pkg.revision.label} · ${STATE_LABEL[pkg.revision.state]}`} flex={1.5} />
-        {/* The number itself is stamped by finishPdf, keeping every page static for react-pdf. */}
-        <Cell k="Page" flex={1} last />
+        <Cell k="Project" v={`${pkg.project.code} · ${pkg.project.name}`} flex={TITLE_CELLS.project} />
+        <Cell k="Calculation" v={pkg.calc.number} flex={TITLE_CELLS.calc} />
+        <Cell k="Rev" v={pkg.revision.label} flex={TITLE_CELLS.rev} />
+        {/* State and page number are stamped by finishPdf, keeping every page static for react-pdf. */}
+        <Cell k="State" flex={TITLE_CELLS.state} />
+        <Cell k="Page" flex={TITLE_CELLS.page} last />
       </View>
       <View style={{ flexDirection: 'row', height: 22 }}>
         <Cell k="Client" v={pkg.project.client} flex={3} />
@@ -45,25 +48,17 @@ function Header() {
 function Footer() {
   const { pkg } = useReport()
   return (
-    <View fixed style={{ position: 'absolute', bottom: 18, left: MARGIN_X, right: MARGIN_X, height: 26, borderTopWidth: 0.8, borderTopColor: C.ink, flexDirection: 'row', paddingTop: 3 }}>
-      {signatories(pkg).map((sg) => (
-        <View key={sg.role} style={{ flex: 1 }}>
-          <Text style={label}>{sg.role.toUpperCase()}</Text>
-          <Text style={{ fontSize: 7, lineHeight: 1.25 }}>{`${sg.name} · ${sg.date}`}</Text>
+    <View fixed style={{ position: 'absolute', bottom: FOOTER.bottom, left: MARGIN_X, right: MARGIN_X, height: FOOTER.height, borderTopWidth: 0.8, borderTopColor: C.ink, flexDirection: 'row', paddingTop: 3 }}>
+      {/* Names and dates are stamped by finishPdf as the revision is signed. */}
+      {SIGN_OFF_ROLES.map((role) => (
+        <View key={role} style={{ flex: 1 }}>
+          <Text style={label}>{role.toUpperCase()}</Text>
         </View>
       ))}
       <View style={{ flex: 1, alignItems: 'flex-end' }}>
         <Text style={label}>{`GENERATED ${formatDate(pkg.generatedAt)}`}</Text>
         <Text style={{ fontSize: 6.4, color: C.muted, lineHeight: 1.25 }}>{`engine ${pkg.engineVersion} · ${pkg.templateVersion}`}</Text>
       </View>
-    </View>
-  )
-}
-
-function Watermark({ text }: { text: string }) {
-  return (
-    <View fixed style={{ position: 'absolute', top: 0, left: 0, right: 0, bottom: 0, alignItems: 'center', justifyContent: 'center' }}>
-      <Text style={{ fontSize: text.length > 6 ? 84 : 120, fontWeight: 700, color: C.fail, opacity: 0.13, transform: 'rotate(-40deg)' }}>{text}</Text>
     </View>
   )
 }
@@ -80,13 +75,11 @@ export function SectionHead({ id, number, title, first }: { id: string; number: 
 
 export function PdfPage({ children }: { children?: ReactNode }) {
   const { pkg } = useReport()
-  const mark = watermarkFor(pkg.revision.state)
   return (
     <Page size={pkg.paper} style={s.page}>
       <Header />
       {children}
       <Footer />
-      {mark ? <Watermark text={mark} /> : null}
     </Page>
   )
 }

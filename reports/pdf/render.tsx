@@ -17,7 +17,16 @@ import { contentWidth } from './styles'
 
 const componentCache = new Map<string, ReturnType<typeof getMDXComponent>>()
 
+/** The package as handed out: the body, stamped for its state and signatures (finishPdf). */
 export async function renderPdf(pkg: ReportPackage, opts: RenderOptions = {}): Promise<Uint8Array> {
+  return finishPdf(await renderBody(pkg, opts), pkg, opts)
+}
+
+/**
+ * The body of the package, rendered by react-pdf: everything but what sign-off changes. It is
+ * rendered once per revision and stored; each signature stamps it again (finishPdf).
+ */
+export async function renderBody(pkg: ReportPackage, opts: RenderOptions = {}): Promise<Uint8Array> {
   await prepareFonts(opts)
   const source = await loadTemplate(pkg.calc.type, opts)
   const compiled = await compileTemplate(source, 'pdf')
@@ -51,6 +60,5 @@ export async function renderPdf(pkg: ReportPackage, opts: RenderOptions = {}): P
     </ReportCtx.Provider>
   )
   const buffer = await renderToBuffer(element)
-  const bytes = new Uint8Array(buffer.buffer, buffer.byteOffset, buffer.byteLength)
-  return finishPdf(bytes, pkg, date)
+  return new Uint8Array(buffer.buffer, buffer.byteOffset, buffer.byteLength)
 }

@@ -48,5 +48,19 @@ export const s = StyleSheet.create({
   captionLabel: { fontWeight: 700, color: C.ink },
 })
 
-/** Where the title block's page-number cell sits: share of the text width from the left, baseline below the block's top. */
-export const PAGE_NUMBER_CELL = { fromLeft: 6.1 / 7.1, baseline: 18.4 }
+/** The top row of the title block, as flex shares; finishPdf stamps into the State and Page cells. */
+export const TITLE_CELLS = { project: 3, calc: 1.6, rev: 0.5, state: 1.0, page: 1 }
+const titleTotal = Object.values(TITLE_CELLS).reduce((a, b) => a + b, 0)
+/** Share of the text width from the left where a title-block cell starts, and the baseline of its value below the block's top. */
+export const TITLE_CELL_AT = {
+  calc: TITLE_CELLS.project / titleTotal,
+  rev: (TITLE_CELLS.project + TITLE_CELLS.calc) / titleTotal,
+  state: (TITLE_CELLS.project + TITLE_CELLS.calc + TITLE_CELLS.rev) / titleTotal,
+  page: (titleTotal - TITLE_CELLS.page) / titleTotal,
+  /** The second row: Client, then Title (flex 3 : 4.1). */
+  title: 3 / 7.1,
+  baseline: 18.4,
+}
+/** The sign-off strip at the foot of every page: a column per role, then the generation note. */
+export const FOOTER = { bottom: 18, height: 26 }
+export const SIGN_OFF_ROLES = ['Engineer', 'Checker', 'Approver'] as const

@@ -9,7 +9,7 @@ import { changeMemberRole } from '@/server/members'
 import type { Caller } from '@/server/access'
 import { DEMO_PASSWORD } from '@/server/demo/demo-data'
 import { localFileStore } from '@/lib/storage'
-import { renderPdf } from '@/reports'
+import { finishPdf, renderBody, renderPdf } from '@/reports'
 import { canonicalJson, sha256Hex } from '@/reports/hash'
 import { seededDemo, type DemoRole } from '../helpers/demo'
 import { useTempEnvironment } from '../helpers/temp-env'
@@ -22,7 +22,7 @@ let calcId: (n: string) => Promise<string>
 
 beforeAll(async () => {
   env = await useTempEnvironment()
-  deps = { renderer: { renderPdf }, store: localFileStore(`${env.dir}/files`) }
+  deps = { renderer: { renderBody, finishPdf }, store: localFileStore(`${env.dir}/files`) }
   ;({ people, projectId, calcId } = await seededDemo())
 }, 120_000)
 afterAll(() => env.close())

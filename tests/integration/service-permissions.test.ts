@@ -29,7 +29,7 @@ let projectId = ''
 const calcId = 'c-probe'
 const outsider: Caller = { id: 'u-outsider', email: 'someone@elsewhere.example', name: 'Someone Else', isAdmin: false }
 // Never called for real: every probe that reaches it is refused or stops at an unknown id first.
-const deps: RevisionDeps = { renderer: { renderPdf: async () => new Uint8Array() }, store: { put: async () => {}, get: async () => new Uint8Array() } }
+const deps: RevisionDeps = { renderer: { renderBody: async () => new Uint8Array(), finishPdf: async () => new Uint8Array() }, store: { put: async () => {}, get: async () => new Uint8Array() } }
 
 beforeAll(async () => {
   env = await useTempEnvironment()
