@@ -125,9 +125,34 @@ describe('solveStatics', () => {
   it('a load at a ground joint goes straight to the ground', () => {
     const PEAU = SETUPS.PEAU()
     const at = pointsFromJoints(PEAU.model, placeAt(PEAU.cell, 60, 60, 0.4)!)
-    const out = solveStatics(PEAU.model, at, [{ name: 'o', pointLoads: [{ joint: 'O', force: { x: 5, y: 7 } }], weightPerMm: null }])
+    const lc: CaseLoads = { name: 'o', pointLoads: [{ joint: 'O', force: { x: 5, y: 7 } }], weightPerMm: null }
+    const out = solveStatics(PEAU.model, at, [lc])
     if (!out.ok) throw new Error('singular')
     expect(out.largestConnection[0]).toBe(0)
+    expect(out.cases[0].torque).toBe(0)
+    expect(Array.from(out.cases[0].endForces).every((x) => x === 0)).toBe(true)
+    expect(equilibriumResidual(PEAU.model, at, lc, out.cases[0])).toBe(0)
+  })
+  it('a load at any moving joint is carried: whole-body balance and virtual work (A is on the first link)', () => {
+    for (const [which, joints] of [
+      ['PEAU', ['A', 'B', 'P', 'T']],
+      ['HART', ['A', 'B', 'D', 'E', 'P', 'T']],
+    ] as const) {
+      const s = SETUPS[which]()
+      for (const joint of joints) {
+        const lc: CaseLoads = { name: joint, pointLoads: [{ joint, force: { x: 3, y: -11 } }], weightPerMm: null }
+        const deg = 25
+        const { joints: at, pts, out } = solve(s, deg, [lc])
+        const g = wholeBody(s, at, lc, out.cases[0])
+        expect(Math.abs(g.fx) + Math.abs(g.fy), `${which} ${joint}`).toBeLessThan(1e-9)
+        expect(Math.abs(g.m), `${which} ${joint}`).toBeLessThan(1e-7)
+        expect(equilibriumResidual(s.model, pts, lc, out.cases[0])).toBeLessThan(1e-9)
+        const th = (deg * Math.PI) / 180
+        const vw = virtualWorkTorque(s.model, placeAt(s.cell, s.e, s.r, th - VW_STEP)!, placeAt(s.cell, s.e, s.r, th + VW_STEP)!, lc)
+        expect(vw.scale, `${which} ${joint} moves`).toBeGreaterThan(1)
+        expect(Math.abs(vw.torque - out.cases[0].torque)).toBeLessThan(1e-6 * vw.scale)
+      }
+    }
   })
   it('details only the first `detailed` cases, and a workspace must hold every case', () => {
     const PEAU = SETUPS.PEAU()
