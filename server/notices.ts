@@ -5,7 +5,7 @@ import { notices, projectMembers, users, type Calc, type Revision } from '@/db/s
 import { appUrl } from '@/lib/mail/messages'
 import type { Addressee } from '@/lib/review/workflow'
 import { requireCaller, type Caller } from './access'
-import { queueMail } from './mail-queue'
+import { enqueueMail } from './mail/outbox'
 
 /** The people a notice is addressed to: the named checker or approver, else everyone with that role. */
 async function addressees(to: Addressee, calc: Calc, revision: Pick<Revision, 'engineerId' | 'assignedCheckerId' | 'assignedApproverId'> | null) {
@@ -31,23 +31,28 @@ export interface NoticeInput {
 
 /**
  * Tells whoever must act next: an entry in their in-app list and an e-mail that links straight to
- * the page to act on. The mail is queued, never awaited, so a mail server that is down or slow does
- * not fail or hang the action; the in-app entry exists either way.
+ * the page to act on. The mail goes into the outbox in the same transaction as the entry, so a mail
+ * server that is down or slow never fails or hangs the action, and the mail is sent once it is back.
  */
 export async function notify(n: NoticeInput) {
   const people = (await addressees(n.to, n.calc, n.revision)).filter((p) => p.id !== n.by.id)
   if (people.length === 0) return
   const link = `/projects/${n.calc.projectId}/calcs/${n.calc.id}${n.revision ? `?view=${n.revision.id}` : ''}`
-  await db.insert(notices).values(
-    people.map((p) => ({ id: randomUUID(), userId: p.id, projectId: n.calc.projectId, calcId: n.calc.id, revisionId: n.revision?.id ?? null, kind: n.kind, text: n.text, link })),
-  )
-  for (const p of people) {
-    await queueMail({
-      to: p.email,
-      subject: `${n.calc.number}: ${n.text}`,
-      text: `${n.text}.\n\nOpen it here: ${appUrl()}${link}\n\n— Inverso\nYou receive this because you are a member of the project.`,
-    })
-  }
+  await db.transaction(async (tx) => {
+    await tx
+      .insert(notices)
+      .values(people.map((p) => ({ id: randomUUID(), userId: p.id, projectId: n.calc.projectId, calcId: n.calc.id, revisionId: n.revision?.id ?? null, kind: n.kind, text: n.text, link })))
+    for (const p of people) {
+      await enqueueMail(
+        {
+          to: p.email,
+          subject: `${n.calc.number}: ${n.text}`,
+          text: `${n.text}.\n\nOpen it here: ${appUrl()}${link}\n\n— Inverso\nYou receive this because you are a member of the project.`,
+        },
+        tx,
+      )
+    }
+  })
 }
 
 /** The caller's in-app notices, newest first. */
