@@ -8,6 +8,7 @@ import { calculate } from '@/lib/calc/run'
 import { ENGINE_VERSION } from '@/lib/calc/version'
 import { memoryValuesIn } from '@/lib/checks/memory-values'
 import { AppError } from '@/lib/errors'
+import { stripControl } from '@/lib/schemas/clean-text'
 import type { ProjectRole } from '@/lib/review/roles'
 import { STATES, SUBMIT, transitionOf, type TransitionAction, type TransitionSpec } from '@/lib/review/workflow'
 import type { FileStore } from '@/lib/storage'
@@ -132,7 +133,7 @@ export async function saveRevision(caller: Caller | null, projectId: string, cal
     checkedAt: null,
     approvedAt: null,
     issuedAt: null,
-    reason: opts.reason?.trim() || null,
+    reason: stripControl(opts.reason ?? '').trim().slice(0, 500) || null,
     submittedFailing: failing,
     assignedCheckerId: checkerId,
     assignedApproverId: approverId,
@@ -242,7 +243,8 @@ export async function transitionRevision(
   const change = { ...sign, ...issue, state: t.to, ...(restamp ? { frozenAt: now.toISOString() } : {}) }
   const replaced = superseding(all, t.supersedes, rev.id)
   const others = [...all.filter((r) => !replaced.some((x) => x.id === r.id)), ...replaced]
-  const event: PendingEvent = { action: t.action, by: who.name, at: now, reason: opts.reason?.trim() || null, signature: signed?.signature ?? null, confirms: confirmations.map((c) => c.value) }
+  const reason = stripControl(opts.reason ?? '').trim().slice(0, 500) || null
+  const event: PendingEvent = { action: t.action, by: who.name, at: now, reason, signature: signed?.signature ?? null, confirms: confirmations.map((c) => c.value) }
   const pdf = restamp ? await storePdf(await stamp({ ...rev, ...change }, others, deps, event), deps) : {}
   await db.transaction(async (tx) => {
     const moved = await tx
@@ -258,7 +260,7 @@ export async function transitionRevision(
       fromState: rev.state,
       toState: t.to,
       userId: who.id,
-      reason: opts.reason?.trim() || null,
+      reason,
       statement: signed?.statement ?? null,
       signature: signed?.signature ?? null,
       at: now,
@@ -268,7 +270,7 @@ export async function transitionRevision(
       .set({ state: t.to, updatedAt: now, ...(t.signs === 'checker' ? { checkerId: who.id } : t.signs === 'approver' ? { approverId: who.id } : {}) })
       .where(eq(calcs.id, calc.id))
   })
-  await audit({ userId: who.id, action: `revision.${t.action}`, projectId, calcId: calc.id, detail: { revisionId: rev.id, reason: opts.reason ?? null, materialsConfirmed: confirmations.map((c) => c.value) } })
+  await audit({ userId: who.id, action: `revision.${t.action}`, projectId, calcId: calc.id, detail: { revisionId: rev.id, reason, materialsConfirmed: confirmations.map((c) => c.value) } })
   await notify({ to: t.notice, kind: t.action, calc, revision: rev, by: who, text: `${calc.number} rev ${rev.label} ${t.ask}` })
   return { ...rev, ...change }
 }

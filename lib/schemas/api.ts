@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { stripControl } from './clean-text'
 import { PROJECT_ROLES } from '@/lib/review/roles'
 import { REMARK_SEVERITIES, REVISION_STATES, TRANSITION_ACTIONS } from '@/lib/review/workflow'
 
@@ -106,7 +107,7 @@ export const inputsSavedOut = z.object({ summary: summaryOut })
 
 export const createRevisionBody = z
   .object({
-    reason: z.string().trim().max(500).optional(),
+    reason: z.string().trim().max(500).transform((v) => stripControl(v)).optional(),
     checkerId: z.string().optional(),
     approverId: z.string().optional(),
     confirmFailing: z.boolean().optional().describe('Submit although a check fails (recorded on the revision)'),
@@ -117,7 +118,7 @@ export const transitionBody = z
   .object({
     action: z.enum(TRANSITION_ACTIONS, { error: `must be one of ${TRANSITION_ACTIONS.join(', ')}` }),
     password: z.string().max(200).optional().describe('Needed by check, approve, issue and void'),
-    reason: z.string().trim().max(500).optional().describe('Needed by return, withdraw and void'),
+    reason: z.string().trim().max(500).transform((v) => stripControl(v)).optional().describe('Needed by return, withdraw and void'),
     confirmMaterials: z.literal(true).optional().describe('issue: the approver confirms every "from memory" material value the revision uses'),
   })
   .strict()
@@ -126,11 +127,11 @@ export const remarkBody = z
   .object({
     stepId: z.string().min(1).max(200).nullish().describe('A step, table or figure id; leave out for the whole calc'),
     severity: z.enum(REMARK_SEVERITIES, { error: `must be one of ${REMARK_SEVERITIES.join(', ')}` }),
-    text: z.string().trim().min(3, 'write the remark (at least 3 characters)').max(4000),
+    text: z.string().trim().min(3, 'write the remark (at least 3 characters)').max(4000).transform((v) => stripControl(v, { multiline: true })),
   })
   .strict()
 
-export const replyBody = z.object({ text: z.string().trim().min(2, 'write the reply').max(4000) }).strict()
+export const replyBody = z.object({ text: z.string().trim().min(2, 'write the reply').max(4000).transform((v) => stripControl(v, { multiline: true })) }).strict()
 
 export const idOut = z.object({ id: z.string() })
 

@@ -3,6 +3,7 @@ import { PROJECT_ROLES } from '@/lib/review/roles'
 import { REMARK_SEVERITIES } from '@/lib/review/workflow'
 import { isMechanismId, mechanismIds, mechanisms, type MechanismId } from '@/lib/mechanisms'
 import { emailField } from './auth'
+import { stripControl } from './clean-text'
 
 /** A calc's type is the id of a registered mechanism (lib/mechanisms). */
 export type CalcType = MechanismId
@@ -26,7 +27,7 @@ export const createCalcSchema = z.object({
     .min(1, 'Give the calc a number.')
     .max(40, 'Use at most 40 characters.')
     .regex(/^[A-Za-z0-9][A-Za-z0-9._/-]*$/, 'Use letters, digits and . _ / - only.'),
-  title: z.string().trim().min(3, 'Give the calc a title of at least 3 characters.').max(200),
+  title: z.string().trim().min(3, 'Give the calc a title of at least 3 characters.').max(200).transform((v) => stripControl(v)),
   calcType: calcTypeField,
 })
 
@@ -42,8 +43,8 @@ export const createProjectSchema = z.object({
     .min(2, 'Give the project a code of at least 2 characters.')
     .max(20)
     .regex(/^[A-Z0-9-]+$/, 'Use capital letters, digits and - only.'),
-  name: z.string().trim().min(3, 'Give the project a name.').max(120),
-  client: z.string().trim().max(120).default(''),
+  name: z.string().trim().min(3, 'Give the project a name.').max(120).transform((v) => stripControl(v)),
+  client: z.string().trim().max(120).default('').transform((v) => stripControl(v)),
 })
 
 export const remarkSchema = z.object({
@@ -52,13 +53,13 @@ export const remarkSchema = z.object({
   /** Empty for a remark on the whole calc. */
   stepId: z.string().max(200).optional().transform((v) => v || null),
   severity: z.enum(REMARK_SEVERITIES, { message: 'Choose how serious the remark is.' }),
-  text: z.string().trim().min(3, 'Write the remark (at least 3 characters).').max(4000),
+  text: z.string().trim().min(3, 'Write the remark (at least 3 characters).').max(4000).transform((v) => stripControl(v, { multiline: true })),
 })
 
 export const remarkReplySchema = z.object({
   calcId: z.string().min(1),
   remarkId: z.string().min(1),
-  text: z.string().trim().min(2, 'Write a reply.').max(4000),
+  text: z.string().trim().min(2, 'Write a reply.').max(4000).transform((v) => stripControl(v, { multiline: true })),
 })
 
 export const remarkCloseSchema = z.object({ calcId: z.string().min(1), remarkId: z.string().min(1) })

@@ -40,7 +40,8 @@ export const transitionAction = dataAction(async (caller, projectId: string, cal
 export const addAttachmentAction = formAction(z.object({ calcId: z.string().min(1) }), async ({ calcId }, { projectId, caller, formData }) => {
   const file = formData.get('file')
   if (!(file instanceof File) || file.size === 0) return { fieldErrors: { file: 'Choose a PDF file.' } }
-  await addAttachment(caller, projectId, calcId, { name: file.name, bytes: new Uint8Array(await file.arrayBuffer()) }, localFileStore())
+  // The File itself: the service checks its size before reading a byte of it.
+  await addAttachment(caller, projectId, calcId, file, localFileStore())
   revalidatePath(calcPath(projectId, calcId))
   return { ok: true, message: `${file.name} will be appended to the next revision.` }
 })
