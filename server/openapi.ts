@@ -23,7 +23,8 @@ import {
   revisionRowOut,
   transitionBody,
 } from '@/lib/schemas/api'
-import { createCalcSchema } from '@/lib/schemas/project'
+import { cloneCalcSchema, createCalcSchema, importCalcSchema } from '@/lib/schemas/project'
+import { sizingInputSchema } from '@/lib/sizing/schema'
 
 const json = (schema: z.ZodType, description: string) => ({ description, content: { 'application/json': { schema } } })
 
@@ -64,11 +65,46 @@ const createCalcBody = createCalcSchema.omit({ calcType: true }).extend({ mechan
 
 const base = '/api/v1/projects/{projectId}/calcs/{calcId}/revisions/{revisionId}'
 
+// The bench's routes (clone, export, import, search, sizing) and the register's added columns.
+const benchRegisterRow = registerRowOut.extend({
+  verdict: z.enum(['pass', 'fail', 'infeasible']).nullable().describe('Verdict of the working inputs'),
+  maxUtilisation: z.number().nullable().describe('Governing utilisation of the working inputs'),
+  governing: z.string().nullable(),
+  openRemarks: z.number().describe('Remarks not closed on the newest revision'),
+})
+const searchHitOut = z.object({
+  calcId: z.string(),
+  number: z.string(),
+  title: z.string(),
+  kind: z.enum(['number', 'title', 'mechanism', 'input', 'step', 'remark']),
+  text: z.string(),
+  stepId: z.string().optional(),
+  revisionId: z.string().optional(),
+})
+const sizingOut = z.object({
+  goal: z.string(),
+  goalLabel: z.string(),
+  request: z.record(z.string(), z.unknown()),
+  proposals: z.array(
+    z.object({
+      mechanism: z.string(),
+      label: z.string(),
+      geometry: z.record(z.string(), z.number()),
+      metrics: z.record(z.string(), z.unknown()),
+      rank: z.number(),
+      tradeoff: z.string(),
+    }),
+  ),
+  tried: z.number(),
+  feasible: z.number(),
+  advice: z.string().optional(),
+})
+
 /** Every operation of API v1. A test checks that each route file under app/api/v1 appears here. */
 export const OPERATIONS: Op[] = [
   { method: 'get', path: '/api/v1/projects', summary: 'Projects you belong to', ok: { status: 200, schema: items(projectOut), description: 'Projects' }, errors: [401] },
   { method: 'get', path: '/api/v1/projects/{projectId}/members', summary: 'Members of a project', ok: { status: 200, schema: items(memberOut), description: 'Members' }, errors: [401, 404] },
-  { method: 'get', path: '/api/v1/projects/{projectId}/calcs', summary: 'The calc register', ok: { status: 200, schema: items(registerRowOut), description: 'Calcs' }, errors: [401, 404] },
+  { method: 'get', path: '/api/v1/projects/{projectId}/calcs', summary: 'The calc register', ok: { status: 200, schema: items(benchRegisterRow), description: 'Calcs' }, errors: [401, 404] },
   { method: 'post', path: '/api/v1/projects/{projectId}/calcs', summary: 'Create a draft calc (defaults saved and run)', body: createCalcBody, ok: { status: 201, schema: calcOut, description: 'The new calc' }, errors: [400, 401, 403, 404, 409, 413, 415, 422] },
   { method: 'get', path: '/api/v1/projects/{projectId}/calcs/{calcId}', summary: 'A calc, its working inputs, the working result’s summary and its revisions', ok: { status: 200, schema: calcOut, description: 'The calc' }, errors: [401, 404] },
   { method: 'put', path: '/api/v1/projects/{projectId}/calcs/{calcId}/inputs', summary: 'Replace the working inputs', body: calcInput, ok: { status: 200, schema: inputsSavedOut, description: 'Saved and run' }, errors: [400, 401, 403, 404, 413, 415, 422] },
@@ -90,6 +126,11 @@ export const OPERATIONS: Op[] = [
   { method: 'get', path: '/api/v1/notices', summary: 'Your in-app notices, newest first', ok: { status: 200, schema: items(noticeOut), description: 'Notices' }, errors: [401] },
   { method: 'post', path: '/api/v1/verify', summary: 'Public: is this PDF (multipart field `file`) or code (`{ code }`) an issued package of this server?', body: verifyBody, ok: { status: 200, schema: verificationOut, description: 'The verdict' }, errors: [400, 413, 415, 422], open: true },
   { method: 'post', path: '/api/v1/analyse', summary: 'Run a calc without storing it: the CLI’s input in, the CLI’s output out', body: calcInput, ok: { status: 200, schema: z.record(z.string(), z.unknown()), description: 'The CLI’s output JSON' }, errors: [400, 401, 413, 415, 422] },
+  { method: 'post', path: '/api/v1/projects/{projectId}/calcs/{calcId}/clone', summary: 'Clone a calc: a new draft with its working inputs, no revisions', body: cloneCalcSchema.omit({ calcId: true }), ok: { status: 201, schema: calcOut, description: 'The new calc' }, errors: [400, 401, 403, 404, 409, 413, 415, 422] },
+  { method: 'get', path: '/api/v1/projects/{projectId}/calcs/{calcId}/export', summary: 'The working inputs as a calc input file (the CLI’s JSON)', ok: { status: 200, schema: calcInput, description: 'The calc input file' }, errors: [401, 404] },
+  { method: 'post', path: '/api/v1/projects/{projectId}/calcs/import', summary: 'A new draft calc from a calc input file; 422 names the file’s fields', body: importCalcSchema, ok: { status: 201, schema: calcOut, description: 'The new calc' }, errors: [400, 401, 403, 404, 409, 413, 415, 422] },
+  { method: 'get', path: '/api/v1/projects/{projectId}/calcs/search', summary: 'Find calcs by number, title, input names, step titles and remarks', query: z.object({ q: z.string().describe('At least 2 characters, case-insensitive') }), ok: { status: 200, schema: items(searchHitOut), description: 'Hits, in calc number order' }, errors: [401, 404] },
+  { method: 'post', path: '/api/v1/size', summary: 'Sizing assistant: ranked feasible Peaucellier and Hart proposals for a stroke, offset, envelope, transmission angle and load', body: sizingInputSchema, ok: { status: 200, schema: sizingOut, description: 'The proposals, best first' }, errors: [400, 401, 413, 415, 422] },
   { method: 'get', path: '/api/v1/openapi.json', summary: 'This document', ok: { status: 200, schema: z.record(z.string(), z.unknown()), description: 'OpenAPI 3.1' }, errors: [], open: true },
 ]
 

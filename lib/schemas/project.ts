@@ -31,6 +31,23 @@ export const createCalcSchema = z.object({
   calcType: calcTypeField,
 })
 
+const calcNumber = createCalcSchema.shape.number
+const calcTitle = createCalcSchema.shape.title
+
+/** Clone: number and title may be left out (the next free number, "Copy of …"). */
+export const cloneCalcSchema = z.object({
+  calcId: z.string().min(1),
+  number: z.preprocess((v) => (v === '' ? undefined : v), calcNumber.optional()),
+  title: z.preprocess((v) => (v === '' ? undefined : v), calcTitle.optional()),
+})
+
+/** Import: a calc input file (the CLI's JSON) made into a new calc. */
+export const importCalcSchema = z.object({
+  number: z.preprocess((v) => (v === '' ? undefined : v), calcNumber.optional()),
+  title: calcTitle,
+  inputs: z.record(z.string(), z.unknown(), { error: 'must be a calc input object (the CLI’s JSON)' }),
+})
+
 export const inviteSchema = z.object({
   email: emailField,
   role: z.enum(PROJECT_ROLES, { message: 'Choose a role.' }),
