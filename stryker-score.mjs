@@ -6,7 +6,7 @@
 import { readFileSync } from 'node:fs'
 import ts from 'typescript'
 
-const DISPLAY_PROPS = new Set(['title', 'note', 'label', 'formula', 'caution', 'message', 'rhoMinName', 'rhoMaxName', 'splitReason'])
+const DISPLAY_PROPS = new Set(['title', 'note', 'label', 'formula', 'caution', 'message', 'rhoMinName', 'rhoMaxName', 'splitReason', 'farName'])
 const DISPLAY_CALLS = new Set(['fail', 'Error'])
 
 const file = process.argv[2] ?? 'reports-mutation/mutation.json'

@@ -72,29 +72,54 @@ export function linkCase(
   return index(checkComponent(input, 'L', { kind: 'link', ...forces }) as never)
 }
 
+const SUPERSCRIPT: Record<string, string> = { '⁻': '-', '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9' }
+
 /**
- * The numbers printed in a TeX string, in order: `1.234 \cdot 10^{5}` is one
- * number; exponents `^2` and fractions' parts are numbers of their own.
+ * The numbers printed in a TeX string or a message, in order: `1.234 \cdot 10^{5}`,
+ * `1.2 \times 10^{-5}` and `1.2×10⁻⁵` are one number each, a true minus (U+2212) is a
+ * minus, thin-space digit groups (`18 900`) are one number; exponents such as `^2` and
+ * the parts of fractions are numbers of their own.
  */
 export function printedNumbers(tex: string): number[] {
   const out: number[] = []
-  const re = /(-?\d+(?:\.\d+)?)(?: \\cdot 10\^\{(-?\d+)\})?/g
-  for (const m of tex.matchAll(re)) out.push(m[2] === undefined ? Number(m[1]) : Number(m[1]) * 10 ** Number(m[2]))
+  const re = /([-\u2212]?(?:\d{1,3}(?:\u2009\d{3})+|\d+)(?:\.\d+)?)(?:\s*\\(?:cdot|times)\s*10\^\{([-\u2212]?\d+)\}|×10([⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+))?/g
+  for (const m of tex.matchAll(re)) {
+    const mant = Number(m[1].replace(/\u2009/g, '').replace('\u2212', '-'))
+    const exp = m[2] !== undefined ? Number(m[2].replace('\u2212', '-')) : m[3] !== undefined ? Number([...m[3]].map((c) => SUPERSCRIPT[c]).join('')) : 0
+    out.push(mant * 10 ** exp)
+  }
   return out
 }
 
-/** Printed to 4 significant digits: a relative difference up to 5e-4 is rounding. */
+/**
+ * Printed to 4 significant figures (3 below 10⁻³, where a power of ten is written),
+ * rounded to nearest or away from the limit: a difference up to one unit in the last
+ * figure is rounding (relative 10⁻³, 10⁻² below 10⁻³).
+ */
 export const samePrinted = (printed: number, value: number): boolean =>
-  value === 0 ? printed === 0 : Math.abs(printed - value) <= 5.01e-4 * Math.abs(value)
+  value === 0 ? printed === 0 : Math.abs(printed - value) <= (Math.abs(value) < 1e-3 ? 1.001e-2 : 1.001e-3) * Math.abs(value)
+
+/**
+ * Every number of the hand calculation is printed in the text (to the 4 figures printed),
+ * each matched to its own printed number; the order of the working and any extra figures
+ * (units, exponents) are left to the report's layout.
+ */
+export function expectNumbers(text: string, expected: number[], what = ''): void {
+  const got = printedNumbers(text)
+  const used = new Set<number>()
+  const missing = expected.filter((v) => {
+    const i = got.findIndex((p, k) => !used.has(k) && samePrinted(p, v))
+    if (i < 0) return true
+    used.add(i)
+    return false
+  })
+  expect(missing, `${what}: hand-calculated ${missing.join(', ')} not printed in\n${text}`).toEqual([])
+}
 
 /** Every number of the step's working, in order, against the hand calculation. */
 export function expectPrinted(step: StepLike | undefined, expected: number[]): void {
   expect(step, 'step exists').toBeDefined()
-  const got = printedNumbers(step!.substituted ?? '')
-  expect(got.length, `${step!.id}: ${step!.substituted}`).toBe(expected.length)
-  expected.forEach((v, i) => {
-    expect(samePrinted(got[i], v), `${step!.id}: number ${i + 1} printed ${got[i]}, hand calculation ${v}\n${step!.substituted}`).toBe(true)
-  })
+  expectNumbers(step!.substituted ?? '', expected, step!.id)
 }
 
 /** Relative closeness for hand-calculated values (6 significant digits unless told). */

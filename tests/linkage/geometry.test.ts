@@ -4,7 +4,7 @@ import { hartCell } from '@/lib/linkage/cells/hart'
 import { inRing, sqrt0 } from '@/lib/linkage/cells/cell'
 import { assessGeometry, isStraight, tracerPath } from '@/lib/linkage/geometry'
 import { runSweep } from '@/lib/linkage/sweep'
-import { printedNumbers } from '../checks/_hand'
+import { expectNumbers } from '../checks/_hand'
 
 /*
  * Feasibility and stroke of the crank-driven cells, worked out by hand from the
@@ -27,7 +27,7 @@ describe('crank reach verdicts', () => {
     expect(v.reach).toBe('beyond-reach')
     expect(v.feasibility.ok).toBe(false)
     expect(v.feasibility.kind).toBe('crank-cannot-reach')
-    expect(printedNumbers(v.feasibility.message)).toEqual([180, 137.5])
+    expectNumbers(v.feasibility.message, [180, 137.5])
     expect(v.path).toBeNull()
     expect(v.stroke).toEqual({ half: 0, crankMinDeg: 0, crankMaxDeg: 0 })
     expect(v.k).toBe(18900)
@@ -39,16 +39,16 @@ describe('crank reach verdicts', () => {
     // e = r = 40: 2r = 80 < l − s = 90
     const v = assessGeometry(PEAU(), 40, 40, 5)
     expect(v.reach).toBe('cannot-reach')
-    expect(printedNumbers(v.feasibility.message)).toEqual([2, 80, 90])
+    expectNumbers(v.feasibility.message, [2, 80, 90])
     // off-centre: e = 50, r = 30: e + r = 80 < 90
-    expect(printedNumbers(assessGeometry(PEAU(), 50, 30, 5).feasibility.message)).toEqual([80, 90])
+    expectNumbers(assessGeometry(PEAU(), 50, 30, 5).feasibility.message, [80, 90])
   })
   it('split: e + r at or past the outer radius', () => {
     // e = r = 70: 2r = 140 ≥ 137.5
     const v = assessGeometry(PEAU(), 70, 70, 5)
     expect(v.reach).toBe('split')
     expect(v.feasibility.kind).toBe('split-segment')
-    expect(printedNumbers(v.feasibility.message)).toEqual([2, 140, 137.5])
+    expectNumbers(v.feasibility.message, [2, 140, 137.5])
   })
   it('an invalid cell: nothing reported but the reason', () => {
     const v = assessGeometry(peaucellierCell({ arm: 60, side: 80 }), 30, 30, 5)
@@ -75,11 +75,12 @@ describe('stroke and usable stroke', () => {
     expect(v.stroke.half).toBeCloseTo(157.5 * Math.tan((lim / 2) * DEG), 9)
     expect(v.stroke.crankMinDeg).toBeCloseTo(-lim, 12)
     expect(v.feasibility).toMatchObject({ ok: true, kind: 'ok' })
-    expect(printedNumbers(v.feasibility.message)).toEqual([2, 157.5, 82.82, 5])
+    expectNumbers(v.feasibility.message, [2, 157.5, 82.82, 5])
     expect(v.path).toEqual({ kind: 'line', point: { x: 157.5, y: 0 }, direction: { x: 0, y: 1 } })
   })
   it('no usable stroke when the toggle margin reaches the crank limit (margin = limit included)', () => {
-    const v = assessGeometry(PEAU(), 60, 60, lim)
+    const limitDeg = assessGeometry(PEAU(), 60, 60, 5).limitDeg
+    const v = assessGeometry(PEAU(), 60, 60, limitDeg)
     expect(v.feasibility).toMatchObject({ ok: false, kind: 'no-usable-stroke' })
     expect(v.usable).toEqual({ half: 0, crankMinDeg: 0, crankMaxDeg: 0 })
     expect(v.stroke.half).toBeGreaterThan(0) // the stroke between toggles is still reported
@@ -104,7 +105,7 @@ describe('stroke and usable stroke', () => {
     const v = assessGeometry(PEAU(), 52, 60, 5)
     expect(v.feasibility.kind).toBe('circle-arc')
     expect(v.path).toEqual({ kind: 'arc', centre: { x: (18900 * 52) / -896, y: 0 }, radius: (18900 * 60) / 896 })
-    expect(printedNumbers(v.feasibility.message)).toEqual([52, 60, -1097, 0, 1266])
+    expectNumbers(v.feasibility.message, [52, 60, -1097, 0, 1266])
   })
   it('Hart, straight line: usable half stroke from the tracer at the reduced crank limit', () => {
     // e = r = 40: toggle at |OP| = 56 = 80 cos(θ/2) → θ_lim = 2 acos(0.7) = 91.146°; line x = k/(2r) = 142.8
@@ -163,6 +164,8 @@ describe('cells place nothing outside their working ring', () => {
     expect(peaucellierCell({ arm: 60, side: 60 }).place({ x: 1e-9, y: 0 })).toBeNull()
   })
   it('the ring test allows rounding only', () => {
+    expect(inRing(90 * (1 - 1e-12), 90, 100)).toBe(true) // the tolerance itself is inside
+    expect(inRing(100 * (1 + 1e-12), 90, 100)).toBe(true)
     expect(inRing(90 * (1 - 1e-13), 90, 100)).toBe(true)
     expect(inRing(90 * (1 - 1e-11), 90, 100)).toBe(false)
     expect(inRing(100 * (1 + 1e-13), 90, 100)).toBe(true)
@@ -174,16 +177,16 @@ describe('cells place nothing outside their working ring', () => {
 
 describe('closed forms printed as worked', () => {
   it('Peaucellier: k = l² − s², ρ_min = l − s, ρ_max = √k', () => {
-    expect(printedNumbers(PEAU().tex.k.substituted)).toEqual([150, 2, 60, 2, 18900])
-    expect(printedNumbers(PEAU().tex.rhoMin.substituted)).toEqual([150, 60, 90])
-    expect(printedNumbers(PEAU().tex.rhoMax.substituted)).toEqual([18900, 137.477])
+    expectNumbers(PEAU().tex.k.substituted, [150, 2, 60, 2, 18900])
+    expectNumbers(PEAU().tex.rhoMin.substituted, [150, 60, 90])
+    expectNumbers(PEAU().tex.rhoMax.substituted, [18900, 137.477])
     expect(PEAU().rhoMinName).toBe('l − s')
     expect(PEAU().rhoMaxName).toBe('√k')
   })
   it("Hart: k = μ(1 − μ)(a² − b²), ρ = μ(a ∓ b)", () => {
-    expect(printedNumbers(HART().tex.k.substituted)).toEqual([0.4, 1, 0.4, 240, 2, 100, 2, 11424])
-    expect(printedNumbers(HART().tex.rhoMin.substituted)).toEqual([0.4, 240, 100, 56])
-    expect(printedNumbers(HART().tex.rhoMax.substituted)).toEqual([0.4, 240, 100, 136])
+    expectNumbers(HART().tex.k.substituted, [0.4, 1, 0.4, 240, 2, 100, 2, 11424])
+    expectNumbers(HART().tex.rhoMin.substituted, [0.4, 240, 100, 56])
+    expectNumbers(HART().tex.rhoMax.substituted, [0.4, 240, 100, 136])
     expect(HART().k).toBeCloseTo(11424, 9)
   })
   it('link stations put O, P and T at fraction μ (Hart) and the pins at the link ends', () => {
