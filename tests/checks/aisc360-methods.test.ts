@@ -64,6 +64,8 @@ describe('AISC 360-16 pin, LRFD, single shear', () => {
     near(c.bending.capacity, 452389.34, 1e-7)
     expectPrinted(s.bending, [10000, 10, 2, 2, 4, 2, 90000, 502700, 0.9, 502700, 452400])
     expect(c.bending.clause).toMatch(/^AISC 360-16 §F11\.1 \(solid round: M_n = F_y Z ≤ 1\.6 F_y S_x\), φ = 0\.9; moment from single shear/)
+    expect(c.shear.clause).toMatch(/, φ = 0\.75$/)
+    expect(c.bearing.clause).toBe('AISC 360-16 §J7(a), Eq. J7-1, φ = 0.75 (F_y the lower of pin and plate)')
   })
 })
 
@@ -94,6 +96,11 @@ describe('AISC 360-16 link, ASD, flat bar: §D5, §D2, §E3 (elastic), §H1.1 (H
     expectPrinted(s.bearing, [1.8, 300, 20, 10, 108000, 2, 54000])
     near(c['gross-yielding'].capacity, 107784.43, 1e-7)
     expectPrinted(s['gross-yielding'], [300, 600, 180000, 1.67, 107800])
+    // the Ω each clause states is the Ω the check used
+    expect(c['tensile-rupture'].clause).toBe('AISC 360-16 §D5.1(a), Eq. D5-1, Ω = 2; b_e = 2t + 0.63 in (2t + 16 mm) ≤ actual')
+    expect(c['shear-rupture'].clause).toBe('AISC 360-16 §D5.1(b), Eq. D5-2, Ω = 2; A_sf = 2t(a + d/2)')
+    expect(c.bearing.clause).toBe('AISC 360-16 §D5.1(c) with §J7(a), Eq. J7-1, Ω = 2')
+    expect(c['gross-yielding'].clause).toBe('AISC 360-16 §D5.1(d) with §D2(a), Eq. D2-1, Ω = 1.67')
   })
   it('§D5.2 dimensions', () => {
     const { c, s } = run()
