@@ -67,6 +67,13 @@ export const LINK_FIELDS = (materials: readonly string[]): InputFieldDef[] => [
   { path: 'defaults.link.section.width', label: 'Flat bar width', unit: 'mm', step: '0.5' },
   { path: 'defaults.link.section.thickness', label: 'Flat bar thickness', unit: 'mm', step: '0.5' },
   { path: 'defaults.link.material', label: 'Link material', options: materialOptions(materials) },
+  { path: 'defaults.link.eye.edgeAlong', label: 'Eye end distance a', unit: 'mm', step: '0.5', hint: 'hole edge to the link end, along the link' },
+]
+
+/** Optional: the links' own weight, added to every load case. */
+export const SELF_WEIGHT_FIELDS: InputFieldDef[] = [
+  { path: 'selfWeight.density', label: 'Density ρ', unit: 'kg/m³', step: '10', hint: 'steel 7850; leave empty to leave weight out' },
+  { path: 'selfWeight.area', label: 'Link section A', unit: 'mm²', step: '1' },
 ]
 
 /** Only the sizes an engineer typically changes per component; anything else stays on the defaults. */
@@ -80,6 +87,7 @@ export const OVERRIDE_FIELDS = (calcType: CalcType): InputFieldDef[] => {
     ...links.flatMap((l) => [
       { path: `links.${l}.section.width`, label: `${l}: width`, unit: 'mm', step: '0.5' },
       { path: `links.${l}.section.thickness`, label: `${l}: thickness`, unit: 'mm', step: '0.5' },
+      { path: `links.${l}.eye.edgeAlong`, label: `${l}: eye end distance a`, unit: 'mm', step: '0.5' },
     ]),
   ]
 }

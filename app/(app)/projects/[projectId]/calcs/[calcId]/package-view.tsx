@@ -33,6 +33,8 @@ interface PackageViewProps {
   canRemark: boolean
   /** The viewer may tick steps as verified. */
   canTick: boolean
+  /** The viewer's name, shown on a tick before the server confirms it. */
+  viewer: string
 }
 
 const STATUS = { open: 'open', answered: 'answered', closed: 'closed' } as const
@@ -46,7 +48,7 @@ export function PackageView(props: PackageViewProps) {
   const { step: picked, pick } = useReview()
   const [slots, setSlots] = useState<Map<string, HTMLElement>>(new Map())
   const [ticks, setTicks] = useState(props.ticks)
-  const [pending, start] = useTransition()
+  const [, start] = useTransition()
   useEffect(() => setTicks(props.ticks), [props.ticks])
 
   // One slot per step, inside the step's box, that the review is portalled into.
@@ -81,15 +83,30 @@ export function PackageView(props: PackageViewProps) {
     pick({ id: box.id.slice('step-'.length), label: `Step ${n} — ${title}` })
   }
 
-  const toggle = (stepId: string, ticked: boolean) =>
+  const [tickError, setTickError] = useState<string | null>(null)
+  const toggle = (stepId: string, ticked: boolean) => {
+    // Shown at once; the server's list replaces it, or the old one comes back with the reason.
+    const before = ticks
+    setTicks(ticked ? [...ticks, { stepId, by: props.viewer, at: new Date().toISOString() }] : ticks.filter((t) => t.stepId !== stepId))
+    setTickError(null)
     start(async () => {
       const out = await tickStepAction(props.projectId, props.calcId, props.revisionId!, stepId, ticked)
       if (out.ok && out.data?.ticks) setTicks(out.data.ticks as StepTick[])
+      else {
+        setTicks(before)
+        setTickError(out.message ?? 'The tick was not saved.')
+      }
     })
+  }
 
   return (
     <>
       {props.canRemark && <p className="px-6 pt-3 text-xs text-ink/70">Click a step to write a remark on it.</p>}
+      {tickError && (
+        <p role="alert" className="mx-6 mt-2 rounded bg-fail-soft px-3 py-2 text-sm text-fail">
+          {tickError}
+        </p>
+      )}
       <div ref={root} className={`inverso-report px-6 py-4 ${props.canRemark ? 'inv-pickable' : ''}`} onClick={onClick} dangerouslySetInnerHTML={{ __html: props.html }} />
       {[...slots].map(([stepId, slot]) => {
         const remarks = props.remarks.filter((r) => r.stepId === stepId)
@@ -99,7 +116,7 @@ export function PackageView(props: PackageViewProps) {
           <div className="inv-review-box" data-testid={`review-${stepId}`}>
             {props.canTick && props.revisionId ? (
               <label className="inv-tick">
-                <input type="checkbox" checked={!!tick} disabled={pending} onChange={(e) => toggle(stepId, e.target.checked)} /> Verified
+                <input type="checkbox" checked={!!tick} onChange={(e) => toggle(stepId, e.target.checked)} /> Verified
                 {tick ? ` — ${tick.by}, ${tick.at.slice(0, 10)}` : ''}
               </label>
             ) : tick ? (

@@ -48,12 +48,12 @@ function useRun() {
   const router = useRouter()
   const [state, setState] = useState<ActionState>({})
   const [pending, start] = useTransition()
-  const run = (fn: () => Promise<ActionState>, after?: () => void) =>
+  const run = (fn: () => Promise<ActionState>, after?: (message?: string) => void) =>
     start(async () => {
       const result = await fn()
       setState(result)
       if (result.ok) {
-        after?.()
+        after?.(result.message)
         router.refresh()
       }
     })
@@ -61,7 +61,7 @@ function useRun() {
 }
 
 /** Submitting the working inputs: reason, the checker and approver named, a failing calc confirmed. */
-function SubmitForm(props: RevisionsPanelProps & { onDone: () => void }) {
+function SubmitForm(props: RevisionsPanelProps & { onDone: (message?: string) => void }) {
   const { state, pending, run } = useRun()
   const id = useId()
   const [confirm, setConfirm] = useState(false)
@@ -121,7 +121,7 @@ function SubmitForm(props: RevisionsPanelProps & { onDone: () => void }) {
         <button type="submit" className="btn" disabled={pending || (!!props.workingFails && !confirm)}>
           {pending ? 'Running the calc and writing the package…' : 'Save revision and send to check'}
         </button>
-        <button type="button" className="btn-quiet" onClick={props.onDone}>
+        <button type="button" className="btn-quiet" onClick={() => props.onDone()}>
           Cancel
         </button>
       </div>
@@ -130,7 +130,7 @@ function SubmitForm(props: RevisionsPanelProps & { onDone: () => void }) {
 }
 
 /** A transition, confirmed: what will be signed, the password, the reason, the material values to confirm. */
-function TransitionForm({ t, rev, props, onDone }: { t: TransitionSpec; rev: RevisionRow; props: RevisionsPanelProps; onDone: () => void }) {
+function TransitionForm({ t, rev, props, onDone }: { t: TransitionSpec; rev: RevisionRow; props: RevisionsPanelProps; onDone: (message?: string) => void }) {
   const { state, pending, run } = useRun()
   const id = useId()
   const [materials, setMaterials] = useState(false)
@@ -202,7 +202,7 @@ function TransitionForm({ t, rev, props, onDone }: { t: TransitionSpec; rev: Rev
         <button type="submit" className="btn" disabled={pending || blocked > 0 || (needsMaterials && !materials)}>
           {pending ? 'Signing…' : t.button}
         </button>
-        <button type="button" className="btn-quiet" onClick={onDone}>
+        <button type="button" className="btn-quiet" onClick={() => onDone()}>
           Cancel
         </button>
       </div>
@@ -213,18 +213,28 @@ function TransitionForm({ t, rev, props, onDone }: { t: TransitionSpec; rev: Rev
 export function RevisionsPanel(props: RevisionsPanelProps) {
   const { projectId, calcId, revisions, allowed } = props
   const [open, setOpen] = useState<string | null>(null)
+  const [done, setDone] = useState<string | null>(null)
+  const close = (message?: string) => {
+    setOpen(null)
+    setDone(message ?? null)
+  }
   const pdf = (id: string, paper: string) => `/api/v1/projects/${projectId}/calcs/${calcId}/revisions/${id}/pdf?paper=${paper}`
   return (
     <section className="panel flex flex-col gap-3 p-4" data-testid="revisions">
       <div className="flex items-center justify-between">
         <h2 className="h2">Revisions</h2>
         {props.canSave && open !== 'submit' && (
-          <button type="button" className="btn" onClick={() => setOpen('submit')}>
+          <button type="button" className="btn" onClick={() => { setDone(null); setOpen('submit') }}>
             Save revision for check
           </button>
         )}
       </div>
-      {open === 'submit' && <SubmitForm {...props} onDone={() => setOpen(null)} />}
+      {done && (
+        <p role="status" className="rounded bg-accent-soft px-3 py-2 text-sm text-accent">
+          {done}
+        </p>
+      )}
+      {open === 'submit' && <SubmitForm {...props} onDone={close} />}
       {revisions.length === 0 && <p className="text-ink/70">No revision yet. Save one when the working inputs are ready for check.</p>}
       <ul className="flex flex-col divide-y divide-rule">
         {revisions.map((r) => {
@@ -259,13 +269,13 @@ export function RevisionsPanel(props: RevisionsPanelProps) {
                 </a>
                 <span className="ml-auto flex flex-wrap gap-1">
                   {next.map((t) => (
-                    <button key={t.action} type="button" className="btn-quiet" onClick={() => setOpen(`${r.id}:${t.action}`)} aria-expanded={open === `${r.id}:${t.action}`}>
+                    <button key={t.action} type="button" className="btn-quiet" onClick={() => { setDone(null); setOpen(`${r.id}:${t.action}`) }} aria-expanded={open === `${r.id}:${t.action}`}>
                       {t.button}
                     </button>
                   ))}
                 </span>
               </div>
-              {next.map((t) => open === `${r.id}:${t.action}` && <TransitionForm key={t.action} t={t} rev={r} props={props} onDone={() => setOpen(null)} />)}
+              {next.map((t) => open === `${r.id}:${t.action}` && <TransitionForm key={t.action} t={t} rev={r} props={props} onDone={close} />)}
             </li>
           )
         })}

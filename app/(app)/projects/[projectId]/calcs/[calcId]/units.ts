@@ -45,3 +45,23 @@ export function convertInputs<T extends Tree>(values: T, defs: InputFieldDef[], 
   })
   return out as T
 }
+
+/** The display unit of an SI unit label in `system` (`mm` → `in`), or the label itself. */
+export function displayUnitOf(siUnit: string | undefined, system: UnitSystem): string | undefined {
+  const kind = siUnit ? kindOfSILabel(siUnit) : null
+  return kind ? displayUnit(system, kind) : siUnit
+}
+
+/** An SI value as a field shows it: the stored digits in SI, six significant digits in US units. */
+export function showValue(value: number, siUnit: string | undefined, system: UnitSystem): string {
+  const kind = siUnit ? kindOfSILabel(siUnit) : null
+  if (system === 'SI' || !kind) return String(Number(value.toPrecision(12)))
+  return String(round(fromSI(value, displayUnit(system, kind))))
+}
+
+/** A number typed in the field's display unit, as stored (SI). SI input is stored exactly as typed. */
+export function storeValue(value: number, siUnit: string | undefined, system: UnitSystem): number {
+  const kind = siUnit ? kindOfSILabel(siUnit) : null
+  if (system === 'SI' || !kind) return value
+  return toSI(value, displayUnit(system, kind))
+}
