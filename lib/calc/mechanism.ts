@@ -10,6 +10,11 @@ import { ENGINE_VERSION } from './version'
  * JSON numbers here; form layers coerce strings before parsing. `geometry` is
  * checked by the schema of the mechanism the registry (lib/mechanisms) names.
  */
+/** Smallest transmission angle kept over the working range unless the engineer states one — common practice. */
+export const DEFAULT_MIN_TRANSMISSION_DEG = 30
+/** Straightness the guide must hold over the working range unless the engineer states it, mm. */
+export const DEFAULT_STRAIGHTNESS_TOLERANCE = 0.1
+
 const load = z.object({
   name: z.string({ error: 'must be a text' }).min(1, { error: 'must not be empty' }),
   fx: num(),
@@ -37,6 +42,15 @@ const common = {
   toggleMarginDeg: nonNegative().default(5),
   /** Full stroke the machine needs along the line, mm; checked against the usable stroke. */
   requiredStroke: positive().optional(),
+  /** End stops of the working range as crank angles; statics and checks are solved over it. */
+  workingRange: z
+    .object({ fromDeg: num(), toDeg: num() })
+    .refine((w) => w.fromDeg !== w.toDeg, { error: 'the two end stops must differ', path: ['toDeg'] })
+    .optional(),
+  /** Smallest transmission angle allowed over the working range (common practice: 30°). */
+  minTransmissionAngleDeg: nonNegative().max(90, { error: 'must be at most 90' }).default(DEFAULT_MIN_TRANSMISSION_DEG),
+  /** Largest deviation of the tracer from a straight line allowed over the working range, mm. */
+  straightnessTolerance: positive().default(DEFAULT_STRAIGHTNESS_TOLERANCE),
   amplificationLimit: num().gt(1, { error: 'must be greater than 1' }).default(100),
 }
 
@@ -60,6 +74,7 @@ export const mechanismInputSchema = mechanismCommonSchema
         if (!g.success) for (const issue of g.error.issues) ctx.addIssue({ code: 'custom', path: ['geometry', ...issue.path], message: issue.message })
       }
       if (v.sweep && v.crankAnglesDeg) ctx.addIssue({ code: 'custom', path: ['crankAnglesDeg'], message: 'give either sweep or crankAnglesDeg, not both' })
+      if (v.workingRange && (v.sweep || v.crankAnglesDeg)) ctx.addIssue({ code: 'custom', path: ['workingRange'], message: 'give either workingRange or sweep/crankAnglesDeg, not both' })
       const names = new Set<string>()
       if (Array.isArray(v.loads)) {
         v.loads.forEach((l, i) => {
@@ -105,6 +120,10 @@ export function runMechanism(raw: MechanismInput | AnyMechanismInput): Mechanism
     anglesDeg: input.crankAnglesDeg,
     marginDeg: input.toggleMarginDeg,
     amplificationLimit: input.amplificationLimit,
+    workingRange: input.workingRange,
+    requiredStroke: input.requiredStroke,
+    minTransmissionDeg: input.minTransmissionAngleDeg,
+    straightnessTolerance: input.straightnessTolerance,
   })
   return { mechanism: input.mechanism, engineVersion: ENGINE_VERSION, ...out }
 }

@@ -2,8 +2,9 @@ import { checksInputSchema, ChecksInputError, runChecks, type ChecksInput } from
 import { fieldErrorsOf } from '@/lib/schemas/field-errors'
 import { GENERAL_CAUTION } from '@/lib/cautions'
 import { mechanismInputSchema, runMechanism, type AnyMechanismInput } from './mechanism'
-import { tex as texNumber } from '@/lib/linkage/tex'
-import type { CalcResult, CalcVerdict, CheckItem, MechanismResult, Step } from '@/lib/contract'
+import { formatNumber, texNumber } from '@/lib/units/format'
+import type { CalcResult, CalcVerdict, CheckItem, Criterion, MaterialUse, MechanismResult, Step } from '@/lib/contract'
+import { basisText } from './basis-text'
 
 export type { CalcResult, CalcVerdict }
 
@@ -39,25 +40,48 @@ function strokeRequirement(result: MechanismResult, required: number): Step {
     id: 'kin.required-stroke',
     section: 'kinematics',
     title: 'Usable stroke covers the stroke the machine needs',
-    formula: 's_{req} \\le 2 h_u',
-    substituted: `${texNumber(required)} \\le 2 \\cdot ${texNumber(result.stroke.usable.half)} = ${texNumber(usable)}`,
+    formula: 's_{req} \\le 2\\,h_u',
+    substituted: `${texNumber(required)}\\ \\text{mm} ${ok ? '\\le' : '>'} 2 \\cdot ${texNumber(result.stroke.usable.half)} = ${texNumber(usable)}\\ \\text{mm}`,
     value: usable,
     unit: 'mm',
-    source: 'design requirement (inputs)',
+    criterion: `\\ge ${texNumber(required)}\\ \\text{mm}`,
+    source: 'design requirement (inputs); h_u from the usable-stroke step',
     verdict: ok ? 'pass' : 'fail',
     note: ok ? undefined : 'The cell cannot give the required stroke short of its toggle positions: lengthen the arms or change the crank.',
+    refs: [{ stepId: 'kin.usable-stroke', what: `h_u = ${formatNumber(result.stroke.usable.half)} mm` }],
   }
 }
 
-function verdictOf(result: MechanismResult, checks: CheckItem[], strokeStep: Step | null): CalcVerdict {
-  if (!result.feasibility.ok) return { pass: false, maxUtilisation: 0, governing: result.feasibility.message }
-  if (strokeStep?.verdict === 'fail') return { pass: false, maxUtilisation: 0, governing: `${strokeStep.title}: no (${strokeStep.substituted})` }
-  const worst = checks.reduce<CheckItem | null>((w, c) => (!w || c.utilisation > w.utilisation ? c : w), null)
-  if (!worst) return { pass: true, maxUtilisation: 0, governing: 'no component checks requested' }
+/** Working range inside the usable stroke: end stops stated beyond the toggle margin are refused by the verdict. */
+function marginCriterion(result: MechanismResult, marginDeg: number): Criterion | null {
+  const w = result.workingRange
+  if (!w || !result.feasibility.ok) return null
+  const u = result.stroke.usable
+  const ok = w.crankMinDeg >= u.crankMinDeg - 1e-9 && w.crankMaxDeg <= u.crankMaxDeg + 1e-9
   return {
-    pass: checks.every((c) => c.pass),
+    id: 'toggle-margin',
+    label: `Working range keeps ${formatNumber(marginDeg)}° of crank angle from the locked positions`,
+    required: `${formatNumber(u.crankMinDeg)}° ≤ θ ≤ ${formatNumber(u.crankMaxDeg)}°`,
+    provided: `${formatNumber(w.crankMinDeg)}° … ${formatNumber(w.crankMaxDeg)}°`,
+    pass: ok,
+    stepId: 'kin.working-range',
+  }
+}
+
+function verdictOf(result: MechanismResult, checks: CheckItem[], criteria: Criterion[]): CalcVerdict {
+  if (!result.feasibility.ok) return { pass: false, maxUtilisation: 0, governing: result.feasibility.message, unmet: [result.feasibility.message] }
+  const unmet = criteria.filter((c) => !c.pass).map((c) => c.label)
+  const failedRules = checks.filter((c) => c.kind === 'detailing' && !c.pass).map((c) => `${c.component}: ${c.check}`)
+  const strength = checks.filter((c) => c.kind !== 'detailing')
+  const worst = strength.reduce<CheckItem | null>((w, c) => (!w || c.utilisation > w.utilisation ? c : w), null)
+  const all = [...unmet, ...failedRules]
+  if (!worst) return { pass: all.length === 0, maxUtilisation: 0, governing: 'no component checks requested', unmet: all }
+  return {
+    pass: all.length === 0 && strength.every((c) => c.pass),
     maxUtilisation: worst.utilisation,
-    governing: `${worst.component} — ${worst.check} (${worst.clause})`,
+    governing: `${worst.component} — ${worst.check}`,
+    governingStepId: worst.stepId,
+    unmet: all,
   }
 }
 
@@ -69,6 +93,7 @@ export function runCalc(input: CalcInput): { ok: true; result: CalcResult } | { 
   const mech = runMechanism(input.mechanism)
   let checks: CheckItem[] = []
   let cautions = [GENERAL_CAUTION]
+  let materials: MaterialUse[] = []
   const steps = [...mech.steps]
   const tables = [...mech.tables]
   if (input.checks && mech.feasibility.ok && mech.envelope.length > 0) {
@@ -77,6 +102,7 @@ export function runCalc(input: CalcInput): { ok: true; result: CalcResult } | { 
       checks = c.checks
       steps.push(...c.steps)
       tables.push(...c.tables)
+      materials = c.materials
       cautions = [...new Set([GENERAL_CAUTION, ...c.cautions])]
     } catch (err) {
       if (err instanceof ChecksInputError) return { ok: false, fieldErrors: Object.fromEntries(err.issues.map((i) => [i.path, i.message])) }
@@ -86,7 +112,35 @@ export function runCalc(input: CalcInput): { ok: true; result: CalcResult } | { 
   const required = input.mechanism.requiredStroke
   const strokeStep = required ? strokeRequirement(mech, required) : null
   if (strokeStep) steps.splice(steps.findLastIndex((s) => s.section === 'kinematics') + 1, 0, strokeStep)
-  return { ok: true, result: { ...mech, steps, tables, checks, cautions, verdict: verdictOf(mech, checks, strokeStep) } }
+  const criteria: Criterion[] = [...(mech.criteria ?? [])]
+  if (strokeStep) {
+    criteria.unshift({
+      id: 'required-stroke',
+      label: 'Stroke the machine needs, short of the locked positions',
+      required: `s ≥ ${formatNumber(required!)} mm`,
+      provided: `2 h_u = ${formatNumber(2 * mech.stroke.usable.half)} mm`,
+      pass: strokeStep.verdict === 'pass',
+      stepId: strokeStep.id,
+    })
+  }
+  const margin = input.mechanism.workingRange ? marginCriterion(mech, input.mechanism.toggleMarginDeg ?? 5) : null
+  if (margin) criteria.unshift(margin)
+  const units = input.checks?.units ?? 'SI'
+  return {
+    ok: true,
+    result: {
+      ...mech,
+      steps,
+      tables,
+      checks,
+      cautions,
+      criteria,
+      verdict: verdictOf(mech, checks, criteria),
+      materials,
+      basis: basisText(input, mech, materials),
+      ...(units === 'US' ? { units } : {}),
+    },
+  }
 }
 
 export type Calculated = { ok: true; input: CalcInput; result: CalcResult } | { ok: false; fieldErrors: Record<string, string> }

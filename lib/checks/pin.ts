@@ -12,6 +12,8 @@ export interface PinMoment {
   formula: string
   substituted: (F: number) => string
   source: string
+  /** The reference alone, as the package prints it. */
+  ref: string
 }
 
 /**
@@ -31,6 +33,7 @@ export function pinMoment(j: ResolvedJoint): PinMoment {
       formula: 'M_{Ed} = \\frac{F_{Ed}}{8}\\left(b + 4c + 2a\\right)',
       substituted: (F) => `M_{Ed} = \\frac{${fmt(F)}}{8}\\left(${fmt(b)} + 4 \\cdot ${fmt(c)} + 2 \\cdot ${fmt(a)}\\right)`,
       source: 'EN 1993-1-8:2005 Fig. 3.11 (fork with middle plate b, outer plates a, gaps c)',
+      ref: 'EN 1993-1-8:2005 Fig. 3.11',
     }
   }
   const t1 = j.plates[0].thickness
@@ -40,6 +43,7 @@ export function pinMoment(j: ResolvedJoint): PinMoment {
     formula: 'M = F\\left(\\frac{t_1}{2} + c + \\frac{t_2}{2}\\right)',
     substituted: (F) => `M = ${fmt(F)}\\left(\\frac{${fmt(t1)}}{2} + ${fmt(c)} + \\frac{${fmt(t2)}}{2}\\right)`,
     source: 'single shear: couple between the bearing resultants — common practice',
+    ref: 'couple between the bearing resultants (single shear) — common practice',
   }
 }
 

@@ -4,6 +4,7 @@
  * summary table. The governing flag is set here so every basis gets it alike.
  */
 import type { CheckItem, Step, Table } from '@/lib/contract'
+import { formatNumber, utilisationShown } from '@/lib/units/format'
 import { fmt, type CheckSpec, type Demand } from './spec'
 
 export interface ComponentResult {
@@ -11,32 +12,41 @@ export interface ComponentResult {
   steps: Step[]
 }
 
-/** The same 4 significant digits as `fmt`, as plain text (the value is printed, not typeset). */
-function plain(x: number): string {
-  return fmt(x).replace(/ \\cdot 10\^\{(-?\d+)\}/, 'e$1')
-}
-
 function where(d?: Demand): string {
   if (!d) return ''
-  return d.crankDeg === undefined ? ` (${d.loadCase})` : ` (load case ${d.loadCase}, crank ${fmt(d.crankDeg)}°)`
+  return d.crankDeg === undefined ? `force given directly (${d.loadCase})` : `load case “${d.loadCase}”, crank angle ${formatNumber(d.crankDeg)}°`
 }
 
+const SYMBOL: Record<string, string> = { T: 'T_d', C: 'C_d', M: 'M_d', E: 'F_{\\mathrm{eye},d}', F: 'F_d' }
+const TEX_UNIT: Record<string, string> = { T: '\\text{N}', C: '\\text{N}', M: '\\text{N}{\\cdot}\\text{mm}', E: '\\text{N}', F: '\\text{N}' }
+const UNIT: Record<string, string> = { T: 'N', C: 'N', M: 'N·mm', E: 'N', F: 'N' }
+
+/**
+ * The design forces of one component: each envelope value × load factor × dynamic factor, one line
+ * each, with the engine's step it comes from. The value is the first (governing) force, in N.
+ */
 export function forceStep(id: string, title: string, demands: [string, Demand | undefined][], factors: { load: number; dynamic: number }): Step {
-  const shown = demands.filter((x): x is [string, Demand] => x[1] !== undefined)
+  const shown = demands.filter((x): x is [string, Demand] => x[1] !== undefined && (x[1].value > 0 || x[0] === 'F' || x[0] === 'T'))
+  const line = ([k, d]: [string, Demand]) => `${SYMBOL[k] ?? k} = ${fmt(d.raw)} \\cdot ${fmt(factors.load)} \\cdot ${fmt(factors.dynamic)} = ${fmt(d.value)}\\ ${TEX_UNIT[k] ?? '\\text{N}'}`
+  const forces = shown.filter(([k]) => k !== 'M').map(([, d]) => d)
+  const first = forces.reduce<Demand | undefined>((a, d) => (!a || d.value > a.value ? d : a), undefined)
+  const refs = shown.filter(([, d]) => d.stepId).map(([k, d]) => ({ stepId: d.stepId!, what: `${k === 'E' ? 'F_eye' : k} = ${formatNumber(d.raw)} ${UNIT[k] ?? 'N'}` }))
   return {
     id,
     section: 'checks',
     title,
-    formula: 'F_{d} = \\max_{\\text{load cases}} F_{env} \\cdot \\gamma_{load} \\cdot \\gamma_{dyn}',
-    substituted: shown.map(([k, d]) => `${k} = ${fmt(d.raw)} \\cdot ${fmt(factors.load)} \\cdot ${fmt(factors.dynamic)} = ${fmt(d.value)}`).join(',\\; '),
-    value: shown.length ? shown.map(([k, d]) => `${k} ${plain(d.value)}${where(d)}`).join('; ') : 'none',
-    unit: 'N / N·mm',
-    source: 'envelope of the engine over the stroke × user factors',
+    formula: 'F_d = F_{\\mathrm{env}} \\cdot \\gamma_{\\mathrm{load}} \\cdot \\gamma_{\\mathrm{dyn}}',
+    substituted: shown.length ? shown.map(line).join(',\\quad ') : '\\text{none}',
+    value: first ? first.value : 0,
+    unit: 'N',
+    source: 'largest envelope value over the working range and the load cases × the factors of the inputs',
     verdict: 'info',
+    note: shown.length ? shown.map(([k, d]) => `${k === 'E' ? 'F_eye' : k}: ${where(d)}`).join('; ') : undefined,
+    refs,
   }
 }
 
-export function evaluate(kind: 'pin' | 'link', name: string, basis: string, specs: CheckSpec[]): ComponentResult {
+export function evaluate(kind: 'pin' | 'link', name: string, basis: string, specs: CheckSpec[], forceStepId?: string): ComponentResult {
   const component = `${kind} ${name}`
   const items: CheckItem[] = []
   const steps: Step[] = []
@@ -47,6 +57,7 @@ export function evaluate(kind: 'pin' | 'link', name: string, basis: string, spec
     const utilisation = s.demand / s.capacity
     const pass = utilisation <= 1 + 1e-9
     const stepId = `chk.${kind}.${name}.${s.key}`
+    const checkKind = s.kind ?? 'strength'
     items.push({
       component,
       check: s.title,
@@ -61,28 +72,31 @@ export function evaluate(kind: 'pin' | 'link', name: string, basis: string, spec
       loadCase: s.governedBy?.loadCase,
       crankDeg: s.governedBy?.crankDeg,
       stepId,
+      kind: checkKind,
     })
+    const at = where(s.governedBy)
     steps.push({
       id: stepId,
       section: 'checks',
       title: `${component}: ${s.title}`,
       formula: s.formula,
       substituted: s.substituted,
-      value: Number(utilisation.toFixed(4)),
+      // A detailing rule is met or not; a strength check reports its utilisation, rounded up.
+      value: checkKind === 'detailing' ? (pass ? 'met' : 'not met') : utilisationShown(utilisation),
       unit: '—',
-      source: s.clause,
+      source: s.ref ?? s.clause,
       verdict: pass ? 'pass' : 'fail',
-      note: `demand ${fmt(s.demand)} ${s.unit}, capacity ${fmt(s.capacity)} ${s.unit}, utilisation ${fmt(utilisation)}${where(s.governedBy)}${s.note ? `; ${s.note}` : ''}`,
+      criterion: checkKind === 'detailing' ? undefined : 'u = E_d / R_d \\le 1',
+      note: [at ? `Governed by ${at}` : '', s.note ?? ''].filter(Boolean).join('; ') || undefined,
+      ...(forceStepId && s.governedBy ? { refs: [{ stepId: forceStepId, what: 'design force' }] } : {}),
     })
   }
   let g = -1
   items.forEach((it, i) => {
+    if (it.kind === 'detailing') return
     if (g < 0 || it.utilisation > items[g].utilisation) g = i
   })
-  if (g >= 0) {
-    items[g].governing = true
-    steps[g].note = `GOVERNING for ${component}. ${steps[g].note ?? ''}`
-  }
+  if (g >= 0) items[g].governing = true
   return { items, steps }
 }
 

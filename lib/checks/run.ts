@@ -4,7 +4,7 @@
  * resolve → basis → report path, so a single pin checked alone gives exactly
  * the numbers it would get inside a full calc with the same force.
  */
-import type { CheckItem, LoadCaseEnvelope, Step, Table } from '@/lib/contract'
+import type { CheckItem, LoadCaseEnvelope, MaterialUse, Step, Table } from '@/lib/contract'
 import { aiscBasis } from './bases/aisc360'
 import { allowableBasis } from './bases/allowable'
 import { en1993Basis } from './bases/en1993'
@@ -24,6 +24,29 @@ export interface ChecksResult {
   steps: Step[]
   tables: Table[]
   cautions: string[]
+  /** Every material the checks read, one row per material and strength band. */
+  materials: MaterialUse[]
+}
+
+/** Rows of the materials table: which parts use each material, the band that applied and the source as stored. */
+function materialUses(joints: ResolvedJoint[], links: ResolvedLink[]): MaterialUse[] {
+  const rows = new Map<string, MaterialUse>()
+  const add = (m: Material, band: string, fy: number, fu: number, part: string) => {
+    const b = band.includes(', ') ? band.slice(band.indexOf(', ') + 2) : band
+    const key = `${m.id}\u0000${b}`
+    const row = rows.get(key) ?? { id: m.id, name: m.name, usedFor: [], band: b, fy, fu, E: m.E, source: m.sources.strength }
+    if (!row.usedFor.includes(part)) row.usedFor.push(part)
+    rows.set(key, row)
+  }
+  for (const j of joints) {
+    add(j.pin.material, j.pin.band, j.pin.fy, j.pin.fu, 'pins')
+    for (const p of j.plates) add(p.material, p.band, p.fy, p.fu, 'joint plates')
+  }
+  for (const l of links) {
+    add(l.material, l.band, l.fy, l.fu, 'link bodies')
+    add(l.eye.material, l.eye.band, l.eye.fy, l.eye.fu, 'eyes')
+  }
+  return [...rows.values()]
 }
 
 export function basisImpl(b: Basis): BasisImpl {
@@ -54,7 +77,7 @@ function assemble(
   const steps: Step[] = []
   for (const [j, f] of joints) {
     steps.push(forceStep(`chk.pin.${j.name}.force`, `pin ${j.name}: design force`, [['F', f.force]], factors))
-    const r = evaluate('pin', j.name, basis.label, basis.pin(j, f))
+    const r = evaluate('pin', j.name, basis.label, basis.pin(j, f), `chk.pin.${j.name}.force`)
     checks.push(...r.items)
     steps.push(...r.steps)
   }
@@ -62,13 +85,15 @@ function assemble(
     const shown: [string, LinkForces['moment']][] = [
       ['T', f.tension],
       ['C', f.compression],
+      ['E', f.eye],
       ['M', f.moment],
     ]
     steps.push(forceStep(`chk.link.${l.name}.force`, `link ${l.name}: design forces`, shown, factors))
-    const r = evaluate('link', l.name, basis.label, basis.link(l, f))
+    const r = evaluate('link', l.name, basis.label, basis.link(l, f), `chk.link.${l.name}.force`)
     checks.push(...r.items)
     steps.push(...r.steps)
   }
+  markAppendix(steps, checks, joints.map(([j]) => [`pin ${j.name}`, jointKey(j)]), links.map(([l]) => [`link ${l.name}`, linkKey(l)]))
   const cautions = cautionsFor(
     basis.caution,
     used(
@@ -76,7 +101,50 @@ function assemble(
       links.map((x) => x[0]),
     ),
   )
-  return { checks, steps, tables: [summaryTable(checks)], cautions }
+  return {
+    checks,
+    steps,
+    tables: [summaryTable(checks)],
+    cautions,
+    materials: materialUses(
+      joints.map((x) => x[0]),
+      links.map((x) => x[0]),
+    ),
+  }
+}
+
+/** What makes two pins identical: everything but the name. */
+function jointKey(j: ResolvedJoint): string {
+  return JSON.stringify([j.d, j.d0, j.pin.material.id, j.arrangement, j.plates.map((p) => [p.role, p.thickness, p.material.id]), j.gap, j.replaceable])
+}
+
+/** What makes two links identical: section, material, eye, length and buckling data. */
+function linkKey(l: ResolvedLink): string {
+  const e = l.eye
+  return JSON.stringify([l.section.label, l.material.id, e.t, e.w, e.d0, e.d, e.a, e.material.id, e.table39Type, Math.round(l.length * 1e6), l.K, l.curve])
+}
+
+/**
+ * Full working in the body only for one of each group of identical components (the most utilised)
+ * and for every component's design forces and governing check; the other steps go to the appendix.
+ */
+function markAppendix(steps: Step[], checks: CheckItem[], ...groups: [string, string][][]): void {
+  const main = new Set<string>()
+  for (const list of groups) {
+    const byKey = new Map<string, string[]>()
+    for (const [component, key] of list) byKey.set(key, [...(byKey.get(key) ?? []), component])
+    for (const members of byKey.values()) {
+      const worst = (c: string) => Math.max(0, ...checks.filter((x) => x.component === c && x.kind !== 'detailing').map((x) => x.utilisation))
+      const rep = members.reduce((a, b) => (worst(b) > worst(a) ? b : a))
+      for (const x of checks) {
+        if (x.component === rep || (members.includes(x.component) && (x.governing || !x.pass))) main.add(x.stepId)
+      }
+    }
+  }
+  for (const s of steps) {
+    if (s.id.endsWith('.force')) continue
+    if (!main.has(s.id)) s.appendix = true
+  }
 }
 
 function namesOf(envelopes: LoadCaseEnvelope[]): MechanismNames {

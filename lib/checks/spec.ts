@@ -1,3 +1,4 @@
+import { shownPair, texNumber } from '@/lib/units/format'
 /**
  * What a basis returns for one check, before it becomes a CheckItem and a
  * Step. Keeping the bases to this one shape is what lets the runner, the
@@ -11,6 +12,16 @@ export interface Demand {
   crankDeg?: number
   /** The envelope value before the user's factors. */
   raw: number
+  /** The engine's step that shows the envelope value (absent for a force given directly). */
+  stepId?: string
+}
+
+/** The force between a link and its pins (the eye or hole it bears on), and whether it turns across the link. */
+export interface EyeDemand extends Demand {
+  /** True when the force has a component across the link's axis somewhere in the working range. */
+  across: boolean
+  /** The pin where the largest force acts. */
+  joint?: string
 }
 
 export interface JointForces {
@@ -24,15 +35,22 @@ export interface LinkForces {
   tension: Demand
   compression: Demand
   moment?: Demand
-  /** Largest of tension and compression; what eye geometry rules are sized for. */
+  /** Largest of tension and compression. */
   axial: Demand
+  /** The largest pin force on the link's eyes and holes in its worst direction: what the eye rules are sized for. */
+  eye: EyeDemand
 }
 
 export interface CheckSpec {
   /** Last part of the step id: `shear`, `buckling`, … */
   key: string
   title: string
+  /** Clause with its rule in words, for the API and CLI. */
   clause: string
+  /** The reference alone (code, clause, table or equation), as the package prints it beside the working. */
+  ref?: string
+  /** `detailing`: a dimensional rule, met or not met; never the headline utilisation. Default `strength`. */
+  kind?: 'strength' | 'detailing'
   formula: string
   substituted: string
   demand: number
@@ -43,13 +61,34 @@ export interface CheckSpec {
   note?: string
 }
 
-/** Plain number for TeX and notes: 4 significant digits, no exponent for ordinary sizes. */
+/** A number for TeX: the one formatter of lib/units (four significant figures). */
 export function fmt(x: number): string {
-  if (!Number.isFinite(x)) return String(x)
-  if (x === 0) return '0'
-  const a = Math.abs(x)
-  if (a >= 1e6 || a < 1e-3) return x.toExponential(3).replace(/e\+?(-?\d+)/, ' \\cdot 10^{$1}')
-  return String(Number(x.toPrecision(4)))
+  return texNumber(x)
+}
+
+/**
+ * The closing comparison of a check's working, `demand ≤ capacity` or `demand > capacity`: a failing
+ * check rounds its demand up and its capacity down, so it never reads as met.
+ */
+export function cmp(demand: number, capacity: number): string {
+  const fails = demand > capacity * (1 + 1e-9)
+  const [d, c] = shownPair(demand, capacity, fails)
+  return `${texNumber(d)} ${fails ? '>' : '\\le'} ${texNumber(c)}`
+}
+
+/** `≤` or `>` for a comparison whose two sides are printed separately. */
+export function op(demand: number, capacity: number): string {
+  return demand > capacity * (1 + 1e-9) ? '>' : '\\le'
+}
+
+/** Demand as printed in a comparison (rounded up when the check fails). */
+export function shownDemand(demand: number, capacity: number): string {
+  return texNumber(demand, demand > capacity * (1 + 1e-9) ? 'up' : 'nearest')
+}
+
+/** Capacity as printed in a comparison (rounded down when the check fails). */
+export function shownCapacity(demand: number, capacity: number): string {
+  return texNumber(capacity, demand > capacity * (1 + 1e-9) ? 'down' : 'nearest')
 }
 
 export function maxDemand(a: Demand, b: Demand): Demand {

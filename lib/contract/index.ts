@@ -34,6 +34,20 @@ export interface Step {
   verdict?: StepVerdict
   /** A sentence of explanation shown beside the step. */
   note?: string
+  /**
+   * Where the step's inputs come from: other steps (by id) whose values it uses. The package prints
+   * them with their numbers ("1679 N, step 46"), so every value can be traced back.
+   */
+  refs?: { stepId: string; what: string }[]
+  /**
+   * The criterion a verification step is judged by, as TeX (`\\le 10^{-9}`); shown beside its value.
+   */
+  criterion?: string
+  /**
+   * Supporting working: printed in the package's appendix rather than its main body (envelopes,
+   * the full working of components identical to one shown in full). Numbering puts these last.
+   */
+  appendix?: boolean
 }
 
 export interface TableColumn {
@@ -58,9 +72,19 @@ export interface Extreme {
   crankDeg: number
 }
 
+/** The largest force between a link and any one of its pins (its eyes and holes), over the working range. */
+export interface EyeExtreme extends Extreme {
+  /** The pin (joint) at which it occurs. */
+  joint: string
+  /** Largest component across the link's axis at any of its holes over the working range, N (0 for a two-force bar). */
+  across: number
+}
+
 /** Per load case: the largest demands over the swept stroke. Forces in N, moments in N·mm. */
 export interface LoadCaseEnvelope {
   loadCase: string
+  /** Step-id fragment of the load case (`stat.envelope.<slug>.…`). */
+  slug?: string
   links: Record<
     string,
     {
@@ -74,6 +98,10 @@ export interface LoadCaseEnvelope {
   >
   /** Resultant pin force per joint name. */
   pins: Record<string, Extreme>
+  /** Per link: the largest force any one pin applies to it (the eye or hole it bears on). */
+  eyes?: Record<string, EyeExtreme>
+  /** Largest ground reaction per fixed pivot. */
+  reactions?: Record<string, Extreme>
   /** Largest |drive torque|, signed value kept. */
   driveTorque: Extreme
 }
@@ -96,6 +124,11 @@ export interface CheckItem {
   crankDeg?: number
   /** Id of the step that shows the working. */
   stepId: string
+  /**
+   * `strength`: a resistance check, whose utilisation can govern. `detailing`: a dimensional rule
+   * (met or not met), reported in its own table and never the headline utilisation. Absent: strength.
+   */
+  kind?: 'strength' | 'detailing'
 }
 
 export interface Point {
@@ -162,6 +195,13 @@ export type TracerPath =
   | { kind: 'arc'; centre: Point; radius: number }
 
 /** What the linkage engine computes for one mechanism (lib/linkage `analyse`). */
+/** One position of the full range to the locked positions: kinematics only (no statics). */
+export interface KinematicSample {
+  crankDeg: number
+  tracer: Point
+  transmissionAngleDeg: number
+}
+
 export interface LinkageResult {
   /** k = |OP|·|OT|, mm². */
   inversionConstant: number
@@ -172,8 +212,14 @@ export interface LinkageResult {
   stroke: StrokeLimits & { usable: StrokeLimits }
   /** Null when the geometry is infeasible. */
   line: TracerPath | null
-  /** Largest distance of the solved tracer positions from the chord through the end positions, mm. */
+  /** Largest distance of the tracer from the chord through its end positions over the working range, mm. */
   straightness: number
+  /** The crank angles statics and checks are solved over (the working range the engineer states). */
+  workingRange?: StrokeLimits
+  /** The full range to the locked positions, kinematics only: for figures and plots. */
+  kinematics?: KinematicSample[]
+  /** The criteria of the working range the verdict includes besides the component checks. */
+  criteria?: Criterion[]
   /** Positions under the first load case. */
   positions: PositionResult[]
   loadCases: { name: string; positions: PositionResult[] }[]
@@ -191,11 +237,52 @@ export interface MechanismResult extends LinkageResult {
   engineVersion: string
 }
 
+/** A requirement of the calc that is met or not (stroke, straightness, transmission angle, detailing). */
+export interface Criterion {
+  id: string
+  label: string
+  /** What is required and what is provided, as plain text with units. */
+  required: string
+  provided: string
+  pass: boolean
+  stepId?: string
+}
+
 /** The calc's overall answer: every check passes, and which one governs. */
 export interface CalcVerdict {
   pass: boolean
+  /** Largest utilisation of a strength check (detailing rules are criteria, not utilisations). */
   maxUtilisation: number
   governing: string
+  /** Step of the governing strength check. */
+  governingStepId?: string
+  /** Criteria that are not met, by label (empty when all are met). */
+  unmet?: string[]
+}
+
+/** A material as the calc used it: one row per material and strength band. */
+export interface MaterialUse {
+  id: string
+  name: string
+  /** Which parts use it (`pins`, `plates`, `link bodies`, `eyes`). */
+  usedFor: string[]
+  /** The band that applied, e.g. `t ≤ 16 mm`. */
+  band: string
+  fy: number
+  fu: number
+  E: number
+  /** Where the values come from, as stored with the material. */
+  source: string
+}
+
+/** The design basis in words, generated from the calc's inputs. */
+export interface BasisText {
+  /** Basis of the checks, e.g. `EN 1993-1-8 §3.13 with EN 1993-1-1, partial factors γM0 1.0 …`. */
+  label: string
+  statements: string[]
+  assumptions: string[]
+  /** Codes and books the checks use, in citation form. */
+  references: string[]
 }
 
 /** A whole calc: the mechanism's result with the component checks, the cautions and the verdict. */
@@ -203,6 +290,10 @@ export interface CalcResult extends MechanismResult {
   checks: CheckItem[]
   cautions: string[]
   verdict: CalcVerdict
+  materials?: MaterialUse[]
+  basis?: BasisText
+  /** Unit system the engineer works in; the package prints in it. Absent: SI. */
+  units?: 'SI' | 'US'
 }
 
 /**

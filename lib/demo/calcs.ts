@@ -34,13 +34,14 @@ export const DEMO_CALCS = [
   },
   {
     number: 'LC-002',
-    title: 'Glue-head carriage guide',
+    title: 'Glue-head carriage guide, 250 mm stroke',
     calcType: 'hart',
     state: 'in-check' as RevisionState,
     inputs: {
       mechanism: 'hart',
       geometry: { long: 240, short: 100, ratio: 0.3, crank: 40, crankPivotOffset: 40 },
       loads: [{ name: 'Glue head weight and nozzle reaction', fx: 0, fy: -95 }],
+      requiredStroke: 250,
       basis: { kind: 'aisc360', method: 'LRFD' },
       factors: { load: 1.6, dynamic: 1.1 },
       defaults: { joint: { ...DEFAULT_PIN, holeDiameter: 10.7 }, link: { ...DEFAULT_LINK, eye: { edgeAlong: 30, width: 40 } } },
@@ -48,13 +49,14 @@ export const DEMO_CALCS = [
   },
   {
     number: 'LC-003',
-    title: 'Side-flap folder guide (first sizing)',
+    title: 'Side-flap folder guide, 150 mm stroke (first sizing)',
     calcType: 'peaucellier',
     state: 'draft' as RevisionState,
     inputs: {
       mechanism: 'peaucellier',
       geometry: { arm: 200, side: 80, crank: 75, crankPivotOffset: 75 },
       loads: [{ name: 'Folding a flap', fx: 0, fy: -140 }],
+      requiredStroke: 150,
       basis: { kind: 'allowable', factorOfSafety: 2.5 },
       factors: { load: 1, dynamic: 1.3 },
       defaults: { joint: { ...DEFAULT_PIN, pinDiameter: 8, holeDiameter: 8.4 }, link: { ...DEFAULT_LINK, section: { shape: 'flat', width: 20, thickness: 6 } } },

@@ -1,5 +1,5 @@
 import { linkLength, type LinkageModel } from './model'
-import type { LoadCaseEnvelope, Extreme } from '@/lib/contract'
+import type { EyeExtreme, LoadCaseEnvelope, Extreme } from '@/lib/contract'
 import type { CaseSample } from './sweep'
 
 /**
@@ -33,7 +33,7 @@ class Largest {
  * Largest demands over the sweep. Tension positive throughout: maxTension is
  * ≥ 0 and maxCompression ≤ 0 (0 when the link never sees that sign).
  */
-export function envelopeOf(model: LinkageModel, loadCase: string, samples: CaseSample[]): LoadCaseEnvelope {
+export function envelopeOf(model: LinkageModel, loadCase: string, samples: CaseSample[], slug?: string): LoadCaseEnvelope {
   const names = model.links.map((l) => l.name)
   const joints = Object.keys(model.attached)
   const tension = names.map(() => new Largest(samples))
@@ -41,6 +41,11 @@ export function envelopeOf(model: LinkageModel, loadCase: string, samples: CaseS
   const moment = names.map(() => new Largest(samples))
   const pin = joints.map(() => new Largest(samples))
   const torque = new Largest(samples)
+  const eye = names.map(() => new Largest(samples))
+  const eyeAt = names.map(() => 0)
+  const across = names.map(() => 0)
+  const grounds = Object.keys(model.ground)
+  const reaction = grounds.map(() => new Largest(samples))
   for (const s of samples) {
     const p = s.position
     for (let b = 0; b < names.length; b++) {
@@ -48,7 +53,12 @@ export function envelopeOf(model: LinkageModel, loadCase: string, samples: CaseS
       tension[b].offer(m.axialMax, p.crankDeg)
       compression[b].offer(-m.axialMin, p.crankDeg)
       moment[b].offer(p.linkMoments?.[names[b]], p.crankDeg)
+      const before = eye[b].value
+      eye[b].offer(m.eye, p.crankDeg)
+      if (eye[b].value !== before || !eye[b].found) eyeAt[b] = m.eyeAt
+      across[b] = Math.max(across[b], m.across)
     }
+    for (let g = 0; g < grounds.length; g++) reaction[g].offer(p.reactions[grounds[g]]?.magnitude, p.crankDeg)
     for (let j = 0; j < joints.length; j++) pin[j].offer(p.pinForces[joints[j]]?.magnitude, p.crankDeg)
     torque.offer(Math.abs(p.driveTorque), p.crankDeg)
   }
@@ -69,11 +79,20 @@ export function envelopeOf(model: LinkageModel, loadCase: string, samples: CaseS
   })
   const pins: LoadCaseEnvelope['pins'] = {}
   joints.forEach((j, k) => (pins[j] = pin[k].extreme))
+  const eyes: Record<string, EyeExtreme> = {}
+  model.links.forEach((l, b) => {
+    eyes[l.name] = { ...eye[b].extreme, joint: l.points[eyeAt[b]], across: real(across[b]) }
+  })
+  const reactions: Record<string, Extreme> = {}
+  grounds.forEach((g, k) => (reactions[g] = reaction[k].extreme))
   const at = samples.find((s) => s.position.crankDeg === torque.crankDeg)
   return {
     loadCase,
+    ...(slug ? { slug } : {}),
     links,
     pins,
+    eyes,
+    reactions,
     driveTorque: { value: at ? at.position.driveTorque : 0, crankDeg: torque.crankDeg },
   }
 }

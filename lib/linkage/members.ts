@@ -11,6 +11,11 @@ export interface MemberForces {
   axialMin: number
   /** Largest |bending moment| along the link, N·mm. */
   moment: number
+  /** Largest force any one pin applies to the link (the eye or hole it bears on), N, and its point index. */
+  eye: number
+  eyeAt: number
+  /** Largest component of a pin force across the link's axis, N (0 for a two-force bar). */
+  across: number
 }
 
 /**
@@ -63,7 +68,20 @@ export function memberForces(model: LinkageModel, pts: Float64Array, b: number, 
       if (xs > s0 && xs < s1) moment = Math.max(moment, Math.abs(sfn - xs * fn + couple - (wn * xs * xs) / 2))
     }
   }
-  return { axialMid: -feMid - (we * len) / 2, axialMax, axialMin, moment }
+  let eye = 0
+  let eyeAt = 0
+  let across = 0
+  for (let k = 0; k < link.points.length; k++) {
+    const fx = f[o + 2 * k]
+    const fy = f[o + 2 * k + 1]
+    const m = Math.hypot(fx, fy)
+    if (m > eye) {
+      eye = m
+      eyeAt = k
+    }
+    across = Math.max(across, Math.abs(-fx * ey + fy * ex))
+  }
+  return { axialMid: -feMid - (we * len) / 2, axialMax, axialMin, moment, eye, eyeAt, across }
 }
 
 type ForceRec = { x: number; y: number; magnitude: number }

@@ -28,9 +28,11 @@ describe('AISC 360-16 D5 — Design Examples D.7', () => {
     expect(c['bearing'].capacity / 1000).toBeCloseTo(24.3, 1)
     expect(c['gross-yielding'].capacity / 1000).toBeCloseTo(68.85, 2) // 0.90 · 36 · 2.125; the example prints 68.9
     expect(c['bearing'].unit).toBe('lbf')
-    // The example's hole is exactly 1/32 in over the pin, so D5.2 sits at utilisation 1.0 and
-    // governs; of the strength limit states bearing governs, as the example concludes.
-    expect(c['d52-hole'].governing).toBe(true)
+    // The example's hole is exactly 1/32 in over the pin, so D5.2 sits at its limit; it is a
+    // dimensional rule (met / not met), so bearing governs, as the example concludes.
+    expect(c['d52-hole'].kind).toBe('detailing')
+    expect(c['d52-hole'].governing).toBe(false)
+    expect(c['bearing'].governing).toBe(true)
     const strength = ['tensile-rupture', 'shear-rupture', 'bearing', 'gross-yielding'].map((k) => c[k])
     expect(strength.reduce((a, b) => (b.utilisation > a.utilisation ? b : a)).check).toBe(c['bearing'].check)
     expect(c['bearing'].pass).toBe(true)

@@ -1,6 +1,6 @@
 import type { InversorCell } from '../cells/cell'
 import type { GeometryVerdict } from '../geometry'
-import type { LoadCaseEnvelope } from '@/lib/contract'
+import type { LoadCaseEnvelope, StrokeLimits } from '@/lib/contract'
 import type { LoadInput, SweepOutput } from '../sweep'
 
 /** Everything the step and table builders read; they compute nothing new but checks. */
@@ -16,6 +16,13 @@ export interface ReportContext {
   sweep: SweepOutput | null
   envelopes: LoadCaseEnvelope[]
   straightness: number
+  /** The crank range statics is solved over; null when the geometry is infeasible. */
+  working: (StrokeLimits & { source: 'positions' | 'end-stops' | 'required-stroke' | 'usable' }) | null
+  /** Smallest transmission angle over the working range, degrees. */
+  minTransmissionWorking: number
+  minTransmissionDeg: number
+  straightnessTolerance: number
+  requiredStroke?: number
 }
 
 /**
