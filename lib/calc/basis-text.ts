@@ -6,7 +6,14 @@
  */
 import type { BasisText, MaterialUse, MechanismResult } from '@/lib/contract'
 import { formatNumber as n } from '@/lib/units/format'
-import type { CalcInput } from './run'
+import type { ChecksInput } from '@/lib/checks'
+import type { AnyMechanismInput } from './mechanism'
+
+/** The two halves of a calc input (lib/calc/run's CalcInput, named here to keep the import one-way). */
+interface CalcInput {
+  mechanism: AnyMechanismInput
+  checks: ChecksInput | null
+}
 
 const REF = {
   en18: 'EN 1993-1-8:2005, Eurocode 3: Design of steel structures — Part 1-8: Design of joints, §3.13 (pin connections).',
