@@ -1,7 +1,8 @@
 /**
- * Runs once when the server starts: applies pending migrations (idempotent), then starts the mail
- * outbox sender in this process (each instance runs one; a mail is claimed by one instance only).
- * OUTBOX_SENDER=off leaves sending to another instance.
+ * Runs once when the server starts: applies pending migrations (idempotent), then starts the
+ * package render runner and the mail outbox sender in this process (each instance runs one of each;
+ * a job or a mail is claimed by one instance only). RENDER_RUNNER=off / OUTBOX_SENDER=off leave the
+ * work to another instance.
  */
 export async function register() {
   if (process.env.NEXT_RUNTIME !== 'nodejs') return
@@ -10,6 +11,15 @@ export async function register() {
   installClientAddressHeader()
   const [{ db }, { migrateDb }] = await Promise.all([import('./db'), import('./db/migrate')])
   await migrateDb(db)
+  if (process.env.RENDER_RUNNER !== 'off') {
+    // Packages of saved revisions are rendered here, in the worker pool, off every request.
+    const [{ startRenderRunner }, { pooledRenderer }, { localFileStore }] = await Promise.all([
+      import('./server/render-jobs'),
+      import('./server/render-pool'),
+      import('./lib/storage'),
+    ])
+    startRenderRunner({ renderer: pooledRenderer, store: localFileStore() })
+  }
   if (process.env.OUTBOX_SENDER !== 'off') {
     const { startOutboxSender } = await import('./server/mail/outbox')
     startOutboxSender()

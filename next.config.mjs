@@ -11,7 +11,7 @@ const PROXY_BODY_LIMIT = '12mb'
 const nextConfig = {
   poweredByHeader: false,
   // The PDF pipeline runs outside the Next bundle (see DEVELOPERS.md, "Calc packages").
-  serverExternalPackages: ['@react-pdf/renderer', 'mathjax-full', 'mdx-bundler', 'esbuild'],
+  serverExternalPackages: ['@react-pdf/renderer', 'mathjax-full', 'mdx-bundler', 'esbuild', 'piscina'],
   experimental: { serverActions: { bodySizeLimit: ACTION_BODY_LIMIT }, proxyClientMaxBodySize: PROXY_BODY_LIMIT },
   async headers() {
     // Pages and API answers get their headers from proxy.ts; the hashed build assets it skips get these.

@@ -376,6 +376,31 @@ export const signInDevices = sqliteTable(
   (t) => [index('sign_in_devices_user').on(t.userId)],
 )
 
+/**
+ * Package renders waiting to run off the request path (server/render-jobs.ts). A job is claimed by
+ * one instance at a time; a claim that runs out (a crashed process) is taken over.
+ */
+export const renderJobs = sqliteTable(
+  'render_jobs',
+  {
+    id: integer('id').primaryKey({ autoIncrement: true }),
+    revisionId: text('revision_id')
+      .notNull()
+      .references(() => revisions.id, { onDelete: 'cascade' }),
+    /** queued → running → done, or failed after the last attempt. */
+    state: text('state', { enum: ['queued', 'running', 'done', 'failed'] }).notNull().default('queued'),
+    /** What the job is doing now, for the progress shown to the engineer. */
+    stage: text('stage'),
+    attempts: integer('attempts').notNull().default(0),
+    claimedBy: text('claimed_by'),
+    claimedUntil: integer('claimed_until', { mode: 'timestamp_ms' }),
+    error: text('error'),
+    createdAt: createdAt(),
+    finishedAt: integer('finished_at', { mode: 'timestamp_ms' }),
+  },
+  (t) => [index('render_jobs_state').on(t.state, t.id), index('render_jobs_revision').on(t.revisionId)],
+)
+
 export type User = typeof users.$inferSelect
 export type Project = typeof projects.$inferSelect
 export type Calc = typeof calcs.$inferSelect

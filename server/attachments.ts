@@ -113,10 +113,9 @@ export async function pendingAttachments(caller: Caller | null, projectId: strin
   return db.select().from(attachments).where(and(eq(attachments.calcId, calcId), isNull(attachments.revisionId))).orderBy(asc(attachments.createdAt))
 }
 
-/** The appendices that will go with the next revision saved, for rendering it before it is written. */
-export async function pendingAttachmentFiles(calcId: string, store: FileStore) {
-  const rows = await db.select().from(attachments).where(and(eq(attachments.calcId, calcId), isNull(attachments.revisionId))).orderBy(asc(attachments.createdAt))
-  return Promise.all(rows.map(async (r) => ({ id: r.id, name: r.name, bytes: await store.get(r.storageKey) })))
+/** The appendices that will go with the next revision saved. */
+export async function pendingAttachmentRows(calcId: string) {
+  return db.select({ id: attachments.id }).from(attachments).where(and(eq(attachments.calcId, calcId), isNull(attachments.revisionId))).orderBy(asc(attachments.createdAt))
 }
 
 export async function attachmentBytes(revisionId: string, store: FileStore) {

@@ -10,6 +10,7 @@ import { pendingAttachments } from './attachments'
 import { listMaterials } from './materials'
 import { openRemarks, remarksWithThreads } from './remarks'
 import { draftReportPackage, loadReportPackage } from './report-package'
+import { renderStatus } from './render-jobs'
 import { ticksOf } from './ticks'
 
 /** Calcs saved before the working result was stored with the inputs get it on first view, once. */
@@ -19,6 +20,12 @@ async function withWorkingResult(calc: Calc): Promise<Calc> {
   if (!run.ok) return calc
   await db.update(calcs).set({ draftResult: run.result }).where(eq(calcs.id, calc.id))
   return { ...calc, draftResult: run.result }
+}
+
+function preparingText(job: { state: string; stage: string | null; error: string | null } | undefined): string {
+  if (!job) return 'Preparing the package…'
+  if (job.state === 'failed') return `The package could not be prepared (${job.error ?? 'unknown error'}). Save the revision again, or tell an administrator.`
+  return `Preparing the package… ${job.stage ?? 'waiting for the renderer'}`
 }
 
 /**
@@ -33,13 +40,14 @@ export async function getCalcWorkspace(caller: Caller | null, projectId: string,
   const [revisions, members] = await Promise.all([listRevisions(calcId), listMembers(projectId)])
   if (view && view !== 'working' && !revisions.some((r) => r.id === view)) throw new AppError('not_found', 'No such revision.')
   const shown = view === 'working' || revisions.length === 0 ? null : (revisions.find((r) => r.id === view) ?? revisions[0])
-  const [pkg, remarks, ticks, pending, materials, blockers] = await Promise.all([
+  const [pkg, remarks, ticks, pending, materials, blockers, renders] = await Promise.all([
     shown ? loadReportPackage(shown.id) : draftReportPackage(access.project, calc),
     shown ? remarksWithThreads(shown.id) : [],
     shown ? ticksOf(shown.id) : [],
     pendingAttachments(caller, projectId, calcId),
     listMaterials(caller, projectId),
     Promise.all(revisions.map((r) => openRemarks(r.id))),
+    renderStatus(revisions.filter((r) => !r.pdfKey).map((r) => r.id)),
   ])
   const name = (id: string | null) => (id ? (members.find((m) => m.userId === id)?.name ?? '—') : null)
   const people = (role: string) => members.filter((m) => m.role === role && m.active).map((m) => ({ id: m.userId, name: m.name }))
@@ -62,6 +70,8 @@ export async function getCalcWorkspace(caller: Caller | null, projectId: string,
       assignedApprover: name(r.assignedApproverId),
       openRemarks: blockers[i],
       memoryValues: r.state === 'approved' ? memoryValuesIn(r.inputs) : [],
+      /** While the package is rendered off the request path: what the job is doing, or why it failed. */
+      preparing: r.pdfKey ? null : preparingText(renders.get(r.id)),
     })),
   }
 }

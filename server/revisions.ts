@@ -14,7 +14,8 @@ import { STATES, SUBMIT, transitionOf, type TransitionAction, type TransitionSpe
 import type { FileStore } from '@/lib/storage'
 import type { Paper, ReportPackage } from '@/reports/types'
 import { authoriseCalc, type Caller } from './access'
-import { attachmentBytes, pendingAttachmentFiles } from './attachments'
+import { attachmentBytes, pendingAttachmentRows } from './attachments'
+import { enqueueRender, kickRenderRunner } from './render-jobs'
 import { verifyPassword } from './auth/password'
 import { notify } from './notices'
 import { carryOverRemarks, openRemarks } from './remarks'
@@ -50,7 +51,7 @@ async function revisionsOf(calcId: string) {
 }
 
 /** Where a revision's body is kept: written once when the revision is saved, read by every signature. */
-const bodyKey = (revisionId: string) => `bodies/${revisionId}.pdf`
+export const bodyKey = (revisionId: string) => `bodies/${revisionId}.pdf`
 
 async function storePdf(bytes: Uint8Array, deps: RevisionDeps) {
   const pdfHash = sha256Hex(bytes)
@@ -91,10 +92,11 @@ export interface SubmitOptions {
 }
 
 /**
- * Freezes the calc's working inputs into a new revision that goes to check: runs the calc, renders
- * the PDF, then writes the revision, its PDF reference, the superseding of open revisions (whose
- * open remarks follow it), the pending appendices and the history entry in one transaction — a
- * failure anywhere before it changes nothing. The named checker is told.
+ * Freezes the calc's working inputs into a new revision that goes to check: runs the calc, then
+ * writes the revision, the superseding of open revisions (whose open remarks follow it), the
+ * pending appendices, the history entry and the job that renders its package in one transaction —
+ * a failure anywhere before it changes nothing. The package is rendered by the render runner
+ * (server/render-jobs.ts), off the request path. The named checker is told.
  */
 export async function saveRevision(caller: Caller | null, projectId: string, calcId: string, deps: RevisionDeps, opts: SubmitOptions = {}) {
   const { calc, caller: who } = await authoriseCalc(caller, projectId, calcId, SUBMIT.permission)
@@ -142,14 +144,9 @@ export async function saveRevision(caller: Caller | null, projectId: string, cal
   }
   const replaced = superseding(existing, SUBMIT.supersedes, rev.id)
   const others = [...existing.filter((r) => !replaced.some((x) => x.id === r.id)), ...replaced]
-  const appendices = await pendingAttachmentFiles(calc.id, deps.store)
-  const submitted: PendingEvent = { action: 'submit', by: who.name, at: now, reason: rev.reason }
-  const pkg = { ...(await reportPackageOf(rev, others, 'A4', submitted)), attachments: appendices.map(({ name, bytes }) => ({ name, bytes })) }
-  const body = await deps.renderer.renderBody(pkg)
-  await deps.store.put(bodyKey(rev.id), body)
-  const pdf = await storePdf(await deps.renderer.finishPdf(body, pkg), deps)
+  const appendices = await pendingAttachmentRows(calc.id)
   await db.transaction(async (tx) => {
-    await tx.insert(revisions).values({ ...rev, ...pdf })
+    await tx.insert(revisions).values(rev)
     if (replaced.length) await tx.update(revisions).set({ state: 'superseded' }).where(inArray(revisions.id, replaced.map((r) => r.id)))
     await carryOverRemarks(tx, replaced.map((r) => r.id), rev)
     if (appendices.length) await tx.update(attachments).set({ revisionId: rev.id }).where(inArray(attachments.id, appendices.map((a) => a.id)))
@@ -158,7 +155,10 @@ export async function saveRevision(caller: Caller | null, projectId: string, cal
       .update(calcs)
       .set({ state: SUBMIT.to, updatedAt: now, checkerId: checkerId ?? calc.checkerId, approverId: approverId ?? calc.approverId })
       .where(eq(calcs.id, calc.id))
+    // The package is rendered off the request path; the revision cannot be signed until it is there.
+    await enqueueRender(tx, rev.id)
   })
+  kickRenderRunner()
   await audit({ userId: who.id, action: 'revision.saved', projectId, calcId: calc.id, detail: { revisionId: rev.id, failing } })
   await notify({ to: SUBMIT.notice, kind: 'submit', calc, revision: rev, by: who, text: `${calc.number} rev ${rev.label} waits for your check` })
   return rev.id
@@ -231,6 +231,7 @@ export async function transitionRevision(
   if (named && named !== who.id) throw new AppError('forbidden', `Only the ${t.named} named when revision ${rev.label} was submitted may do this.`)
   if (t.signs && [rev.engineerId, rev.checkerId, rev.approverId].includes(who.id)) throw new AppError('forbidden', 'The same person cannot sign a revision in two roles.')
   if (t.reason && !opts.reason?.trim()) throw new AppError('invalid', 'Give a reason.', { reason: 'Say why; it is kept in the history.' })
+  if (!rev.pdfKey) throw new AppError('conflict', `The package of revision ${rev.label} is still being prepared; try again in a moment.`)
   if (t.password) await checkPassword(who, opts.password)
   const confirmations = await refuseBlocked(t, rev, who, opts)
 
@@ -304,8 +305,9 @@ const STORED_PDF_STATES: readonly Revision['state'][] = ['in-check', 'checked', 
 export async function revisionPdf(caller: Caller | null, projectId: string, calcId: string, revisionId: string, paper: Paper, deps: RevisionDeps) {
   const { project, caller: who } = await authoriseCalc(caller, projectId, calcId, 'pdf.download')
   const { calc, revision: rev } = await getRevision(who, projectId, calcId, revisionId)
+  if (!rev.pdfKey) throw new AppError('conflict', `The package of revision ${rev.label} is still being prepared; try again in a moment.`)
   let bytes: Uint8Array
-  if (paper === 'A4' && rev.pdfKey && STORED_PDF_STATES.includes(rev.state)) {
+  if (paper === 'A4' && STORED_PDF_STATES.includes(rev.state)) {
     bytes = await deps.store.get(rev.pdfKey)
     if (sha256Hex(bytes) !== rev.pdfHash) throw new Error(`stored PDF of revision ${rev.id} does not match its hash`)
   } else {

@@ -3,6 +3,7 @@ import { statSync } from 'node:fs'
 import path from 'node:path'
 import { pathToFileURL } from 'node:url'
 import { localFileStore } from '@/lib/storage'
+import { pooledRenderer } from '@/server/render-pool'
 import type { RevisionDeps } from '@/server/revisions'
 
 type ReportsModule = typeof import('@/reports')
@@ -38,7 +39,7 @@ function bundleMtime(file: string): number {
   }
 }
 
+/** Package renders and stamps run in the worker pool (server/render-pool.ts), never on the request thread. */
 export async function rendererDeps(): Promise<RevisionDeps> {
-  const r = await reports()
-  return { renderer: { renderBody: (pkg) => r.renderBody(pkg), finishPdf: (body, pkg) => r.finishPdf(body, pkg) }, store: localFileStore() }
+  return { renderer: pooledRenderer, store: localFileStore() }
 }

@@ -7,6 +7,7 @@ import { SUBMIT, TRANSITIONS, type RevisionState } from '@/lib/review/workflow'
 import type { Caller } from '../access'
 import { hashPassword } from '../auth/password'
 import { createCalc, saveInputs } from '../calcs'
+import { drainRenderJobs } from '../render-jobs'
 import { saveRevision, transitionRevision, type RevisionDeps } from '../revisions'
 import { DEMO_CALCS, DEMO_PASSWORD, DEMO_PROJECT, DEMO_USERS } from './demo-data'
 
@@ -60,6 +61,7 @@ export async function seedDemo(db: Db, deps?: RevisionDeps): Promise<boolean> {
       approverId: people.approver.id,
       confirmFailing: true,
     })
+    await drainRenderJobs(deps)
     for (const action of pathTo(c.state)) {
       await transitionRevision(people[actorOf(action)], projectId, calc.id, revisionId, action, deps, { password: DEMO_PASSWORD, confirmMaterials: true })
     }

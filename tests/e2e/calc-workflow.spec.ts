@@ -32,7 +32,7 @@ test('the engineer sees a bad input at its field, then saves, runs and sends a r
   const failing = panel.getByRole('checkbox', { name: /Submit it anyway/ })
   if (await failing.count()) await failing.check()
   await panel.getByRole('button', { name: 'Save revision and send to check' }).click()
-  await expect(panel.getByRole('status')).toContainText('sent to check', { timeout: 60_000 })
+  await expect(panel.getByRole('status').first()).toContainText('sent to check', { timeout: 60_000 })
   await expect(panel).toContainText('Rev A')
   await expect(panel).toContainText('First sizing for check')
 })

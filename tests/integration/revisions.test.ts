@@ -2,6 +2,7 @@ import { eq } from 'drizzle-orm'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { db } from '@/db'
 import { loadReportPackage } from '@/server/report-package'
+import { drainRenderJobs } from '@/server/render-jobs'
 import { nextRevisionLabel, saveRevision, transitionRevision, type RevisionDeps } from '@/server/revisions'
 import { calcs, revisions } from '@/db/schema'
 import { saveInputs } from '@/server/calcs'
@@ -35,7 +36,11 @@ async function refused(p: Promise<unknown>, pattern: RegExp) {
 }
 
 const calcByNumber = async (n: string) => (await db.select().from(calcs).where(eq(calcs.number, n)))[0]
-const save = async (n: string, who: Caller) => saveRevision(who, projectId, await calcId(n), deps, { reason: 'test', confirmFailing: true })
+const save = async (n: string, who: Caller) => {
+  const id = await saveRevision(who, projectId, await calcId(n), deps, { reason: 'test', confirmFailing: true })
+  await drainRenderJobs(deps)
+  return id
+}
 const move = async (n: string, rev: string, action: string, who: Caller) =>
   transitionRevision(who, projectId, await calcId(n), rev, action, deps, { password: DEMO_PASSWORD, confirmMaterials: true, reason: 'test' })
 const revision = async (id: string) => (await db.select().from(revisions).where(eq(revisions.id, id)))[0]

@@ -2,16 +2,18 @@ import { randomUUID } from 'node:crypto'
 import { eq } from 'drizzle-orm'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { db } from '@/db'
-import { calcs, checkRemarks, notices, outbox, projectMembers, revisions, users } from '@/db/schema'
+import { calcs, checkRemarks, notices, outbox, projectMembers, renderJobs, revisions, users } from '@/db/schema'
 import { AppError } from '@/lib/errors'
 import { PERMISSIONS } from '@/lib/review/permissions'
 import { REVISION_STATES, TRANSITIONS, type RevisionState } from '@/lib/review/workflow'
 import { localFileStore } from '@/lib/storage'
 import { finishPdf, renderBody } from '@/reports'
 import type { Caller } from '@/server/access'
-import { DEMO_PASSWORD } from '@/server/demo/demo-data'
+import { DEMO_CALCS, DEMO_PASSWORD } from '@/server/demo/demo-data'
+import { saveInputs } from '@/server/calcs'
 import { drainOutbox } from '@/server/mail/outbox'
 import { addRemark, closeRemark, listRemarks, replyToRemark } from '@/server/remarks'
+import { drainRenderJobs } from '@/server/render-jobs'
 import { revisionPdf, saveRevision, transitionRevision, type RevisionDeps } from '@/server/revisions'
 import { verifyCode, verifyPdf } from '@/server/verify'
 import { listCaughtMail } from '@/lib/mail/inbox'
@@ -37,7 +39,11 @@ beforeAll(async () => {
 }, 120_000)
 afterAll(() => env.close())
 
-const submit = async (n: string, deps = fake) => saveRevision(people.engineer, projectId, await calcId(n), deps, { reason: 'test', confirmFailing: true })
+const submit = async (n: string, deps = fake) => {
+  const id = await saveRevision(people.engineer, projectId, await calcId(n), deps, { reason: 'test', confirmFailing: true })
+  await drainRenderJobs(deps)
+  return id
+}
 const act = async (n: string, rev: string, action: string, who: Caller, deps = fake, extra: object = {}) =>
   transitionRevision(who, projectId, await calcId(n), rev, action, deps, { password: DEMO_PASSWORD, confirmMaterials: true, reason: 'because', ...extra })
 
@@ -128,6 +134,7 @@ describe('signing', () => {
     await db.insert(users).values({ ...second, passwordHash: (await db.select().from(users).where(eq(users.id, people.checker.id)))[0].passwordHash })
     await db.insert(projectMembers).values({ projectId, userId: second.id, role: 'checker' })
     const rev = await saveRevision(people.engineer, projectId, c, fake, { reason: 'named', checkerId: people.checker.id, confirmFailing: true })
+    await drainRenderJobs(fake)
     expect(await code(saveRevision(people.engineer, projectId, c, fake, { checkerId: people.engineer.id, confirmFailing: true }))).toBe('invalid')
     const err = await act('LC-002', rev, 'check', second).catch((e: AppError) => e)
     expect(err).toMatchObject({ code: 'forbidden', message: expect.stringMatching(/Only the checker named/) })
@@ -135,12 +142,17 @@ describe('signing', () => {
   })
 
   it('issuing asks the approver to confirm the "from memory" material values, and records who did', async () => {
+    // Links of EN AW-6082 T6, whose library values are marked "from memory" (shared MATERIAL-SOURCES.md lists no public copy).
+    const c = await calcId('LC-003')
+    const inputs = DEMO_CALCS.find((d) => d.number === 'LC-003')!.inputs
+    const saved = await saveInputs(people.engineer, projectId, c, { ...inputs, defaults: { ...inputs.defaults, link: { ...inputs.defaults.link, material: '6082-T6' } } })
+    expect(saved.ok).toBe(true)
     const rev = await submit('LC-003')
     await act('LC-003', rev, 'check', people.checker)
     await act('LC-003', rev, 'approve', people.approver)
     const err = await act('LC-003', rev, 'issue', people.approver, fake, { confirmMaterials: undefined }).catch((e: AppError) => e)
     expect((err as AppError).code).toBe('conflict')
-    expect((err as AppError).message).toMatch(/S355\.strength/)
+    expect((err as AppError).message).toMatch(/6082-T6\.strength/)
     expect(await code(act('LC-003', rev, 'issue', people.approver))).toBe('ok')
   })
 })
@@ -149,6 +161,7 @@ describe('the issued PDF verifies, a changed copy does not', () => {
   it('signs, stamps and verifies; one changed byte fails; superseded and voided are said plainly', async () => {
     const c = await calcId('LC-002')
     const rev = await saveRevision(people.engineer, projectId, c, real, { reason: 'to issue', confirmFailing: true })
+    await drainRenderJobs(real)
     await act('LC-002', rev, 'check', people.checker, real)
     await act('LC-002', rev, 'approve', people.approver, real)
     await act('LC-002', rev, 'issue', people.approver, real)
@@ -182,6 +195,35 @@ describe('notices', () => {
     expect(mails.some((m) => m.to.includes(people.checker.email) && m.text.includes(`view=${rev}`))).toBe(true)
     await act('LC-001', rev, 'return', people.checker)
     expect((await db.select().from(notices).where(eq(notices.userId, people.engineer.id))).some((n) => n.kind === 'return')).toBe(true)
+  })
+})
+
+describe('the package is rendered off the request path', () => {
+  it('a saved revision cannot be signed or downloaded until its package is there', async () => {
+    const c = await calcId('LC-003')
+    const rev = await saveRevision(people.engineer, projectId, c, fake, { reason: 'pending', confirmFailing: true })
+    expect(await code(act('LC-003', rev, 'check', people.checker))).toBe('conflict')
+    expect(await code(revisionPdf(people.checker, projectId, c, rev, 'A4', fake))).toBe('conflict')
+    expect(await drainRenderJobs(fake)).toBe(1)
+    expect(await code(act('LC-003', rev, 'check', people.checker))).toBe('ok')
+  })
+
+  it('a render that fails is retried, then left failed with its reason', async () => {
+    const c = await calcId('LC-003')
+    const broken: RevisionDeps = { ...fake, renderer: { ...fake.renderer, renderBody: async () => Promise.reject(new Error('out of memory')) } }
+    const rev = await saveRevision(people.engineer, projectId, c, broken, { reason: 'broken', confirmFailing: true })
+    for (let i = 0; i < 3; i++) await drainRenderJobs(broken)
+    const [job] = await db.select().from(renderJobs).where(eq(renderJobs.revisionId, rev))
+    expect(job).toMatchObject({ state: 'failed', attempts: 3, error: 'out of memory' })
+  })
+
+  it('a claim left by a crashed process is taken over once it runs out', async () => {
+    const c = await calcId('LC-003')
+    const rev = await saveRevision(people.engineer, projectId, c, fake, { reason: 'crash', confirmFailing: true })
+    await db.update(renderJobs).set({ state: 'running', claimedBy: 'dead-instance', claimedUntil: new Date(Date.now() + 60_000) }).where(eq(renderJobs.revisionId, rev))
+    expect(await drainRenderJobs(fake)).toBe(0)
+    expect(await drainRenderJobs(fake, { now: new Date(Date.now() + 120_000) })).toBe(1)
+    expect((await db.select().from(revisions).where(eq(revisions.id, rev)))[0].pdfKey).toBeTruthy()
   })
 })
 

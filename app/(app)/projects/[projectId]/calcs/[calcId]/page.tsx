@@ -142,6 +142,7 @@ export default async function CalcPage({ params, searchParams }: Props) {
                 assignedApprover: rev.assignedApprover,
                 openRemarks: rev.openRemarks,
                 memoryValues: rev.memoryValues.map((m) => ({ key: m.key, source: m.source })),
+                preparing: rev.preparing,
               }))}
             />
             {shown && (
@@ -188,6 +189,7 @@ export default async function CalcPage({ params, searchParams }: Props) {
                 ticks={w.ticks.map((t) => ({ stepId: t.stepId, by: t.by, at: iso(t.at) }))}
                 canRemark={canRemark}
                 canTick={canTick}
+                viewer={user.name}
               />
             ) : (
               <p role="alert" className="m-4 rounded bg-fail-soft p-3 text-fail">

@@ -1,7 +1,7 @@
 'use client'
 
 import { useRouter } from 'next/navigation'
-import { useId, useRef, useState, useTransition } from 'react'
+import { useEffect, useId, useRef, useState, useTransition } from 'react'
 import { FieldError, FormMessage } from '@/app/_components/form'
 import { StateBadge } from '@/app/_components/state-badge'
 import type { ActionState } from '@/app/_lib/action'
@@ -23,6 +23,8 @@ export interface RevisionRow {
   openRemarks: { mustResolve: number; any: number }
   /** "From memory" material values not yet confirmed (what issuing asks the approver to confirm). */
   memoryValues: { key: string; source: string }[]
+  /** Set while the package is being rendered (or why that failed); nothing can be signed meanwhile. */
+  preparing: string | null
 }
 
 interface Person {
@@ -212,6 +214,14 @@ function TransitionForm({ t, rev, props, onDone }: { t: TransitionSpec; rev: Rev
 
 export function RevisionsPanel(props: RevisionsPanelProps) {
   const { projectId, calcId, revisions, allowed } = props
+  const router = useRouter()
+  // While a package is being rendered, look again every few seconds.
+  const waiting = revisions.some((r) => r.preparing && !r.preparing.startsWith('The package could not'))
+  useEffect(() => {
+    if (!waiting) return
+    const timer = setInterval(() => router.refresh(), 2500)
+    return () => clearInterval(timer)
+  }, [waiting, router])
   const [open, setOpen] = useState<string | null>(null)
   const [done, setDone] = useState<string | null>(null)
   const close = (message?: string) => {
@@ -238,7 +248,7 @@ export function RevisionsPanel(props: RevisionsPanelProps) {
       {revisions.length === 0 && <p className="text-ink/70">No revision yet. Save one when the working inputs are ready for check.</p>}
       <ul className="flex flex-col divide-y divide-rule">
         {revisions.map((r) => {
-          const next = transitionsFrom(r.state).filter((t) => allowed.includes(t.action))
+          const next = r.preparing ? [] : transitionsFrom(r.state).filter((t) => allowed.includes(t.action))
           return (
             <li key={r.id} className="flex flex-col gap-1 py-2" data-testid={`revision-${r.label}`}>
               <div className="flex items-center gap-2">
@@ -260,6 +270,11 @@ export function RevisionsPanel(props: RevisionsPanelProps) {
               <div className="font-mono text-[10px] text-ink/70" title="SHA-256 of canonical inputs + result / of the stored PDF">
                 content {r.contentHash?.slice(0, 16)}… · pdf {r.pdfHash?.slice(0, 16)}…
               </div>
+              {r.preparing && (
+                <p role="status" className="text-xs text-caution" data-testid="preparing">
+                  {r.preparing}
+                </p>
+              )}
               <div className="flex flex-wrap items-center gap-2">
                 <a className="text-xs text-accent underline" href={pdf(r.id, 'A4')}>
                   PDF (A4)
