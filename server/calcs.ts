@@ -145,6 +145,12 @@ export async function cloneCalc(caller: Caller | null, projectId: string, calcId
   return createCalc(caller, projectId, { number, title: opts.title ?? `Copy of ${calc.title}`.slice(0, 200), calcType: calc.calcType }, inputs)
 }
 
+/** Number and title only, for a page title. */
+export async function calcHeading(caller: Caller | null, projectId: string, calcId: string) {
+  const { calc } = await authoriseCalc(caller, projectId, calcId, 'project.view')
+  return { number: calc.number, title: calc.title }
+}
+
 /** The working inputs as the CLI reads them (`npm run calc -- file.json`), with the calc they came from. */
 export async function exportCalcInputs(caller: Caller | null, projectId: string, calcId: string) {
   const { calc } = await authoriseCalc(caller, projectId, calcId, 'project.view')

@@ -15,7 +15,7 @@ export type BenchOutcome =
 export function benchCalculate(raw: unknown): BenchOutcome {
   const ranges = rangeErrors(raw)
   const run = calculate(raw)
-  if (!run.ok) return { ok: false, fieldErrors: { ...run.fieldErrors, ...ranges } }
+  if (!run.ok) return { ok: false, fieldErrors: { ...ranges, ...run.fieldErrors } }
   if (Object.keys(ranges).length) return { ok: false, fieldErrors: ranges, result: run.result }
   const r = raw as { mechanism: string; geometry: Record<string, number> }
   const infeasible = feasibilityErrors(r.mechanism, r.geometry, run.result)

@@ -27,7 +27,17 @@ interface Row {
   checker: string | null
   approver: string | null
   updatedAt: string
+  verdict: 'pass' | 'fail' | 'infeasible' | null
+  maxUtilisation: number | null
+  governing: string | null
+  openRemarks: number
 }
+
+const VERDICT = {
+  pass: { label: 'PASS', style: 'border-pass text-pass' },
+  fail: { label: 'FAIL', style: 'border-fail text-fail' },
+  infeasible: { label: 'INFEASIBLE', style: 'border-fail text-fail' },
+} as const
 
 async function fetchJson<T>(url: string): Promise<T> {
   const res = await fetch(url)
@@ -56,6 +66,21 @@ export function RegisterTable({ projectId }: { projectId: string }) {
       col.accessor((r) => CALC_TYPE_LABELS[r.mechanism], { id: 'type', header: 'Type' }),
       col.accessor('currentRevision', { header: 'Rev.', cell: (c) => c.getValue() ?? '—' }),
       col.accessor('state', { header: 'State', cell: (c) => <StateBadge state={c.getValue()} /> }),
+      col.accessor('verdict', {
+        header: 'Verdict',
+        cell: (c) => {
+          const v = c.getValue()
+          return v ? (
+            <span className={`rounded-sm border px-1.5 py-0.5 text-[11px] font-semibold ${VERDICT[v].style}`} title={c.row.original.governing ?? undefined}>
+              {VERDICT[v].label}
+            </span>
+          ) : (
+            '—'
+          )
+        },
+      }),
+      col.accessor('maxUtilisation', { header: 'Utilisation', cell: (c) => (c.getValue() === null ? '—' : (c.getValue() as number).toFixed(2)), sortUndefined: 'last' }),
+      col.accessor('openRemarks', { header: 'Open remarks', cell: (c) => (c.getValue() ? <strong className="text-fail">{c.getValue()}</strong> : '0') }),
       col.accessor('engineer', { header: 'Engineer', cell: (c) => c.getValue() ?? '—' }),
       col.accessor('checker', { header: 'Checker', cell: (c) => c.getValue() ?? '—' }),
       col.accessor('approver', { header: 'Approver', cell: (c) => c.getValue() ?? '—' }),
@@ -76,7 +101,7 @@ export function RegisterTable({ projectId }: { projectId: string }) {
 
   if (error) return <p role="alert" className="panel bg-fail-soft p-4 text-fail">Could not load the register: {String(error.message)}</p>
   return (
-    <div className="panel overflow-x-auto">
+    <div className="panel">
       <div className="flex items-center gap-3 border-b border-rule px-3 py-2">
         <input
           type="search"
@@ -86,10 +111,11 @@ export function RegisterTable({ projectId }: { projectId: string }) {
           value={filter}
           onChange={(e) => setFilter(e.target.value)}
         />
-        <span className="text-xs text-ink/60">{isLoading ? 'Loading…' : `${table.getRowModel().rows.length} of ${data?.items.length ?? 0} calcs`}</span>
+        <span className="text-xs text-ink/80">{isLoading ? 'Loading…' : `${table.getRowModel().rows.length} of ${data?.items.length ?? 0} calcs`}</span>
       </div>
+      <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Calc register (scrolls sideways)">
       <table className="w-full text-left text-sm" data-testid="register">
-        <thead className="bg-paper text-xs text-ink/70">
+        <thead className="bg-paper text-xs text-ink/80">
           {table.getHeaderGroups().map((hg) => (
             <tr key={hg.id}>
               {hg.headers.map((h) => {
@@ -118,13 +144,14 @@ export function RegisterTable({ projectId }: { projectId: string }) {
           ))}
           {!isLoading && table.getRowModel().rows.length === 0 && (
             <tr>
-              <td colSpan={columns.length} className="px-3 py-6 text-center text-ink/60">
+              <td colSpan={columns.length} className="px-3 py-6 text-center text-ink/80">
                 {data?.items.length ? 'No calc matches the filter.' : 'No calcs yet.'}
               </td>
             </tr>
           )}
         </tbody>
       </table>
+      </div>
     </div>
   )
 }

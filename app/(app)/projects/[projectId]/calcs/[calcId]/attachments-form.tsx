@@ -14,12 +14,12 @@ export function AttachmentsForm({ projectId, calcId, pending }: { projectId: str
         <ul className="text-xs">
           {pending.map((a) => (
             <li key={a.id}>
-              {a.name} <span className="text-ink/50">({Math.ceil(a.size / 1024)} kB)</span>
+              {a.name} <span className="text-ink/80">({Math.ceil(a.size / 1024)} kB)</span>
             </li>
           ))}
         </ul>
       ) : (
-        <p className="text-xs text-ink/60">None. Data sheets or test reports (PDF) added here are appended to the package.</p>
+        <p className="text-xs text-ink/80">None. Data sheets or test reports (PDF) added here are appended to the package.</p>
       )}
       <FormMessage state={state} />
       <input type="hidden" name="projectId" value={projectId} />
