@@ -183,6 +183,18 @@ describe('AISC 360-16 link, LRFD, round bar: §E3 inelastic (E3-2)', () => {
     expect(c.buckling.clause).toBe('AISC 360-16 §E3, Eq. E3-2, φ = 0.9, E = 200 000 MPa')
     expectPrinted(s.buckling, [60, 548.3, 238.6, 0.9, 74960, 67460])
   })
+  it('H1.1 for a round: M_n = 1.6 F_y S governs (Z/S = 1.70 > 1.6)', () => {
+    // S = π·20³/32 = 785.40, Z = 20³/6 = 1333.3: M_n = min(300·1333.3, 1.6·300·785.40) = min(400 000, 376 991) = 376 991;
+    // φM_n = 0.9·376 991 = 339 292. P_c = min(67 462, 84 823) = 67 462 (buckling, φ applied);
+    // T = 20 kN, C = 30 kN → P_r = 30 000: 30 000/67 462 = 0.44470 → H1-1a: 0.44470 + 8/9·100 000/339 292 = 0.70668
+    const r = linkCase(
+      LRFD,
+      { section: { shape: 'round', diameter: 20 }, material: 'Bar300', eye: { thickness: 12, width: 50, pinDiameter: 16, holeDiameter: 16.5, edgeAlong: 20 }, length: 300 },
+      { tension: 20000, compression: 30000, moment: 100000 },
+    )
+    near(r.c['axial-bending'].demand, 30000 / 67461.93156748924 + (8 / 9) * (100000 / (0.9 * 1.6 * 300 * 785.3981633974483)), 1e-9)
+    expectPrinted(r.s['axial-bending'], [30000, 67460, 0.4447, 100000, 339300, 0.7067])
+  })
   it('the §D5.2 rules and clauses', () => {
     const { c } = run()
     expect(c['d52-extension'].clause).toBe('AISC 360-16 §D5.2')
