@@ -83,6 +83,9 @@ async function namedMember(projectId: string, userId: string | undefined, role: 
   return userId
 }
 
+/** How long after a save the same content counts as the same save (double click, concurrent requests). */
+const DUPLICATE_SAVE_MS = 2 * 60_000
+
 export interface SubmitOptions {
   reason?: string
   checkerId?: string
@@ -111,7 +114,6 @@ export async function saveRevision(caller: Caller | null, projectId: string, cal
   }
   const checkerId = await namedMember(projectId, opts.checkerId, 'checker', who.id, 'checkerId')
   const approverId = await namedMember(projectId, opts.approverId, 'approver', who.id, 'approverId')
-  const existing = await revisionsOf(calc.id)
   const now = new Date()
   // The stored JSON is the canonical text, so the hash can be recomputed from the row alone.
   const inputs = JSON.parse(canonicalJson(calc.draftInputs)) as unknown
@@ -119,7 +121,7 @@ export async function saveRevision(caller: Caller | null, projectId: string, cal
   const rev: Revision = {
     id: randomUUID(),
     calcId: calc.id,
-    label: nextRevisionLabel(existing.length),
+    label: '', // given inside the write transaction, from the revisions there at that moment
     state: SUBMIT.to,
     inputs,
     result,
@@ -142,10 +144,18 @@ export async function saveRevision(caller: Caller | null, projectId: string, cal
     verificationCode: null,
     createdAt: now,
   }
-  const replaced = superseding(existing, SUBMIT.supersedes, rev.id)
-  const others = [...existing.filter((r) => !replaced.some((x) => x.id === r.id)), ...replaced]
   const appendices = await pendingAttachmentRows(calc.id)
+  // One write transaction: saves of one calc are serialised here (two instances included, by SQLite's write lock).
   await db.transaction(async (tx) => {
+    const existing = await tx.select().from(revisions).where(eq(revisions.calcId, calc.id))
+    const newest = [...existing].sort((a, b) => b.createdAt.getTime() - a.createdAt.getTime())[0]
+    // A second save of the same content moments after the first (a double click, two tabs, two
+    // instances) is the same revision: one wins, the other is told that nothing changed.
+    if (newest && newest.contentHash === rev.contentHash && newest.state === SUBMIT.to && now.getTime() - newest.createdAt.getTime() < DUPLICATE_SAVE_MS) {
+      throw new AppError('conflict', `Revision ${newest.label} with exactly these inputs was saved a moment ago; nothing was changed.`)
+    }
+    rev.label = nextRevisionLabel(existing.length)
+    const replaced = superseding(existing, SUBMIT.supersedes, rev.id)
     await tx.insert(revisions).values(rev)
     if (replaced.length) await tx.update(revisions).set({ state: 'superseded' }).where(inArray(revisions.id, replaced.map((r) => r.id)))
     await carryOverRemarks(tx, replaced.map((r) => r.id), rev)

@@ -227,6 +227,33 @@ describe('the package is rendered off the request path', () => {
   })
 })
 
+describe('races', () => {
+  it('two saves of one calc at once: one revision, the other told that nothing changed', async () => {
+    const c = await calcId('LC-001')
+    const save = () => saveRevision(people.engineer, projectId, c, fake, { reason: 'race', confirmFailing: true })
+    const outcomes = await Promise.all([code(save()), code(save()), code(save())])
+    expect(outcomes.filter((o) => o === 'ok')).toHaveLength(1)
+    expect(outcomes.filter((o) => o === 'conflict')).toHaveLength(2)
+    const labels = (await db.select().from(revisions).where(eq(revisions.calcId, c))).map((r) => r.label)
+    expect(new Set(labels).size).toBe(labels.length)
+    await drainRenderJobs(fake)
+    expect((await db.select().from(revisions).where(eq(revisions.calcId, c))).every((r) => r.pdfKey)).toBe(true)
+  })
+
+  it('two approvers at once: one signature, the other told the revision moved', async () => {
+    const rev = await submit('LC-002')
+    await act('LC-002', rev, 'check', people.checker)
+    const second: Caller = { id: 'u-second-approver', email: 'second.approver@feldmark.example', name: 'Second Approver', isAdmin: false }
+    await db.insert(users).values({ ...second, passwordHash: (await db.select().from(users).where(eq(users.id, people.approver.id)))[0].passwordHash })
+    await db.insert(projectMembers).values({ projectId, userId: second.id, role: 'approver' })
+    const outcomes = await Promise.all([code(act('LC-002', rev, 'approve', people.approver)), code(act('LC-002', rev, 'approve', second))])
+    expect(outcomes.sort()).toEqual(['conflict', 'ok'])
+    const [row] = await db.select().from(revisions).where(eq(revisions.id, rev))
+    expect(row.state).toBe('approved')
+    expect([people.approver.id, second.id]).toContain(row.approverId)
+  })
+})
+
 describe('calc state follows the revision', () => {
   it('a withdrawn revision leaves the calc withdrawn and cannot be signed', async () => {
     const rev = await submit('LC-003')
