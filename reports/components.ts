@@ -16,6 +16,14 @@ export interface ReportComponentProps {
   OtherSteps: Record<string, never>
   ResultsTable: { section?: string; id?: string }
   ChecksTable: Record<string, never>
+  /** The criteria the verdict rests on (stroke, straightness, transmission angle, detailing, strength). */
+  Criteria: Record<string, never>
+  /** The design basis and the assumptions in words, generated from the calc's inputs. */
+  DesignBasis: Record<string, never>
+  Assumptions: Record<string, never>
+  MaterialsTable: Record<string, never>
+  /** Per load case the positions where a value governs, with pin forces and pivot reactions. */
+  GoverningTables: Record<string, never>
   Figure: { at?: string; caption?: string; ordinal?: string }
   Plot: { kind: string; caption?: string; ordinal?: string }
   UtilisationChart: { caption?: string; ordinal?: string }
@@ -41,13 +49,14 @@ export const BACK_MATTER = [
   { id: 'further-steps', title: 'Further steps', continues: false },
   { id: 'references', title: 'References', continues: true },
   { id: 'cautions', title: 'Cautions and limits', continues: true },
-  { id: 'revisions', title: 'Revision history and remarks', continues: false },
+  { id: 'revisions', title: 'Revision history and remarks', continues: true },
   { id: 'signatures', title: 'Signatures', continues: true },
+  { id: 'working', title: 'Appendix: working in full', continues: false },
 ] as const
 
 export interface BackMatterSection {
   id: string
   title: string
-  number: number
+  number: number | string
   continues: boolean
 }

@@ -22,7 +22,7 @@ function pick(envelopes: LoadCaseEnvelope[], get: (e: LoadCaseEnvelope) => Extre
   return best
 }
 
-const zero = (loadCase: string): Demand => ({ value: 0, raw: 0, loadCase })
+const zero = (loadCase: string): Demand => ({ value: 0, raw: 0, loadCase: loadCase === 'direct' ? '—' : loadCase })
 
 export function jointForces(envelopes: LoadCaseEnvelope[], name: string, f: Factors): JointForces {
   const force = pick(envelopes, (e) => e.pins[name], f.load * f.dynamic, (slug) => `stat.envelope.${slug}.pin.${name}`) ?? zero(envelopes[0]?.loadCase ?? '—')

@@ -14,6 +14,7 @@ export interface ComponentResult {
 
 function where(d?: Demand): string {
   if (!d) return ''
+  if (d.raw === 0 && d.crankDeg === undefined && d.loadCase !== 'direct') return 'no such force over the working range (zero)'
   return d.crankDeg === undefined ? `force given directly (${d.loadCase})` : `load case “${d.loadCase}”, crank angle ${formatNumber(d.crankDeg)}°`
 }
 

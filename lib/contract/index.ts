@@ -220,6 +220,8 @@ export interface LinkageResult {
   kinematics?: KinematicSample[]
   /** The criteria of the working range the verdict includes besides the component checks. */
   criteria?: Criterion[]
+  /** The load cases as applied at the tracer, N. */
+  loads?: { name: string; fx: number; fy: number }[]
   /** Positions under the first load case. */
   positions: PositionResult[]
   loadCases: { name: string; positions: PositionResult[] }[]

@@ -168,6 +168,7 @@ export function analyse(input: AnalyseInput): AnalyseOutput {
     ...(working ? { workingRange: { half: working.half, crankMinDeg: working.crankMinDeg, crankMaxDeg: working.crankMaxDeg } } : {}),
     kinematics,
     criteria,
+    loads: input.loads.map((l) => ({ name: l.name, fx: l.fx, fy: l.fy })),
     positions: first,
     loadCases: sweep ? sweep.cases.map((c) => ({ name: c.name, positions: c.samples.map((s) => s.position) })) : [],
     envelope: envelopes,

@@ -29,7 +29,10 @@ export interface NumberedStep {
 export interface ReportContext {
   pkg: ReportPackage
   meta: TemplateMeta
+  /** The body's steps by section (what `<Steps section>` prints). */
   bySection: Map<string, NumberedStep[]>
+  /** The appendix's steps by section, in numbering order. */
+  appendixBySection: Map<string, NumberedStep[]>
   /** Sections the engine produced that the template does not place; shown under "Further steps". */
   otherSections: string[]
   numberOf: Map<string, number>
@@ -63,16 +66,18 @@ export function buildContext(
   // One numbering for everything: the same function the app calls for remarks (stepOutline).
   const byId = new Map(pkg.result.steps.map((s) => [s.id, s]))
   const bySection = new Map<string, NumberedStep[]>()
+  const appendixBySection = new Map<string, NumberedStep[]>()
   const numberOf = new Map<string, number>()
   for (const entry of stepOutline(pkg)) {
-    const list = bySection.get(entry.section) ?? []
+    const into = entry.appendix ? appendixBySection : bySection
+    const list = into.get(entry.section) ?? []
     list.push({ n: entry.number, step: byId.get(entry.id)! })
-    bySection.set(entry.section, list)
+    into.set(entry.section, list)
     numberOf.set(entry.id, entry.number)
   }
   const declared = stepSectionsOf(pkg.calc.type)
   const otherSections = [...bySection.keys()].filter((s) => !declared.includes(s))
-  return { pkg, meta, bySection, otherSections, numberOf, figureWidth: extra.figureWidth, appendixPages: extra.appendixPages ?? [], resultHash: sha256Hex(canonicalJson(pkg.result)), numbering: numberOutline(outline, pkg.result) }
+  return { pkg, meta, bySection, appendixBySection, otherSections, numberOf, figureWidth: extra.figureWidth, appendixPages: extra.appendixPages ?? [], resultHash: sha256Hex(canonicalJson(pkg.result)), numbering: numberOutline(outline, pkg.result) }
 }
 
 /** Step anchors are shared by the web view, the PDF links and checker remarks. */

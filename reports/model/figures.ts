@@ -26,13 +26,13 @@ export function diagramFigure(ctx: ReportContext, at: string | undefined, captio
   const draw = reportPartsOf(ctx.pkg.calc.type).diagram ?? mechanismScene
   const scene = draw(ctx.pkg.result, picks.length ? picks : ['middle'], ctx.figureWidth)
   if (!scene) return null
-  return { scene, label: name, caption: caption ?? 'The mechanism at the start, middle and end of the design stroke, drawn to scale. Dashed: the line the tracer should follow; blue: the tracer path over the solved positions.' }
+  return { scene, label: name, caption: caption ?? 'The mechanism at the start, middle and end of the working range, drawn to scale with its dimensions and the loads of the first load case at T. Dashed: the line x = x_T; thin: the tracer over the full range to the locked positions; thick: over the working range.' }
 }
 
 export function plotFigure(ctx: ReportContext, kind: string, caption: string | undefined, ordinal?: string): FigureView | null {
   const name = label(ctx, ordinal)
   if (!name) return null
-  if (kind !== 'links' && kind !== 'pins' && kind !== 'torque') return null
+  if (kind !== 'links' && kind !== 'pins' && kind !== 'torque' && kind !== 'kinematics') return null
   const scene = plotScene(ctx.pkg.result, kind as PlotKind, ctx.figureWidth)
   if (!scene) return null
   return { scene, label: name, caption: caption ?? PLOT_TITLE[kind as PlotKind] }

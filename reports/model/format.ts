@@ -5,22 +5,15 @@
 import { STATE_LABELS, STATES } from '../../lib/review/workflow'
 import type { StepVerdict } from '../../lib/contract'
 import type { RevisionState } from '../types'
+import { formatNumber as fmt, formatUtilisation as fmtU } from '../../lib/units/format'
 
-// ASCII hyphen-minus: the shipped Noto Sans has no U+2212, and copied numbers must paste as numbers.
-const MINUS = '-'
-
-/** Digits follow magnitude: a few significant figures, never scientific notation. */
-export function formatNumber(n: number, digits?: number): string {
-  if (!Number.isFinite(n)) return String(n)
-  const a = Math.abs(n)
-  const d = digits ?? (a === 0 ? 0 : a >= 1000 ? 0 : a >= 100 ? 1 : a >= 1 ? 2 : 3)
-  let s = a.toFixed(d)
-  if (Number(s) === 0) return d === 0 ? '0' : (0).toFixed(d)
-  const [int, frac] = s.split('.')
-  // A thin space groups thousands only from five digits on, as drawings do.
-  const grouped = int.length > 4 ? int.replace(/\B(?=(\d{3})+(?!\d))/g, '\u2009') : int
-  s = frac ? `${grouped}.${frac}` : grouped
-  return n < 0 ? MINUS + s : s
+/**
+ * Every number goes through the one formatter of lib/units (four significant figures, a true minus
+ * sign, utilisations rounded up to three decimals). `digits` is accepted for old callers and ignored:
+ * a value reads the same in a table, a step and the verdict.
+ */
+export function formatNumber(n: number, _digits?: number): string {
+  return fmt(n)
 }
 
 export function formatValue(value: number | string | boolean | undefined, unit?: string): string {
@@ -31,16 +24,17 @@ export function formatValue(value: number | string | boolean | undefined, unit?:
   return unit === '°' ? `${body}°` : `${body} ${unit}`
 }
 
-/** Same digits as the step that shows the working, so the two always read alike. */
+/** The utilisation as printed everywhere: three decimals, rounded up (a failing 1.0003 reads 1.001). */
 export function formatUtilisation(u: number): string {
-  return formatNumber(u)
+  return fmtU(u)
 }
 
+/** How the value column words a verdict: only what needs the reader's attention is marked. */
 export const VERDICT_LABEL: Record<StepVerdict, string> = {
-  pass: 'PASS',
-  fail: 'FAIL',
-  warn: 'WARN',
-  info: 'INFO',
+  pass: '',
+  fail: 'fails',
+  warn: 'see note',
+  info: '',
 }
 
 /** The same state names as the app's. */

@@ -49,24 +49,30 @@ export interface StepOutlineEntry {
   number: number
   title: string
   section: string
+  /** Printed in the appendix (supporting working) rather than in the body. */
+  appendix: boolean
 }
 
 /**
- * The package's step numbering, as data: steps are numbered section by section in the order the
- * mechanism declares (registry `stepSections`), then any section the engine added in its own order;
- * within a section in result order. Both renderings number from this, and anything else that shows
+ * The package's step numbering, as data: the body's steps section by section in the order the
+ * mechanism declares (registry `stepSections`), then any section the engine added in its own order,
+ * within a section in result order; then the appendix's steps (`Step.appendix`) in the same order. Both renderings number from this, and anything else that shows
  * step numbers (remarks beside the calc page, the API) can call it instead of reading rendered HTML.
  * Pure: no template, no React.
  */
 export function stepOutline(pkg: { calc: Pick<ReportPackage['calc'], 'type'>; result: { steps: readonly Step[] } }): StepOutlineEntry[] {
-  const grouped = new Map<string, Step[]>()
-  for (const step of pkg.result.steps) {
-    const list = grouped.get(step.section) ?? []
-    list.push(step)
-    grouped.set(step.section, list)
-  }
   const declared = stepSectionsOf(pkg.calc.type)
-  const order = [...declared.filter((s) => grouped.has(s)), ...[...grouped.keys()].filter((s) => !declared.includes(s))]
   let n = 0
-  return order.flatMap((section) => (grouped.get(section) ?? []).map((step) => ({ id: step.id, number: ++n, title: step.title, section })))
+  // The body's steps first, section by section; then the appendix's, in the same section order.
+  return [false, true].flatMap((appendix) => {
+    const grouped = new Map<string, Step[]>()
+    for (const step of pkg.result.steps) {
+      if (Boolean(step.appendix) !== appendix) continue
+      const list = grouped.get(step.section) ?? []
+      list.push(step)
+      grouped.set(step.section, list)
+    }
+    const order = [...declared.filter((s) => grouped.has(s)), ...[...grouped.keys()].filter((s) => !declared.includes(s))]
+    return order.flatMap((section) => (grouped.get(section) ?? []).map((step) => ({ id: step.id, number: ++n, title: step.title, section, appendix })))
+  })
 }

@@ -18,13 +18,14 @@ export interface Scene {
   items: SceneItem[]
 }
 
-export const INK = '#1d2a33'
-export const MUTED = '#6b7780'
-export const GRID = '#dde3e7'
-export const ACCENT = '#2f6f8f'
-export const WARN = '#b7791f'
-export const FAIL = '#b03a2e'
-export const PASS = '#3d7a57'
+export const INK = '#1b1f23'
+export const MUTED = '#5f676e'
+export const GRID = '#d9dde0'
+/** The package's one accent colour (reports/pdf/styles.ts C.accent). */
+export const ACCENT = '#a8431f'
+export const WARN = ACCENT
+export const FAIL = ACCENT
+export const PASS = INK
 
 /** Series colours: muted, distinguishable in print and for common colour-vision deficiencies. */
 export const SERIES = ['#2f6f8f', '#c0643f', '#5f8f4e', '#8566a8', '#b99130', '#3c9aa5', '#8a8f94', '#a14f70']

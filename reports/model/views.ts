@@ -4,7 +4,7 @@
  */
 import { GENERAL_CAUTION } from '../../lib/cautions'
 import { mechanismLabel } from '../../lib/mechanisms'
-import type { CheckItem, Step, Table } from '../../lib/contract'
+import type { CheckItem, LoadCaseEnvelope, PositionResult, Step, Table } from '../../lib/contract'
 import type { ReportPackage } from '../types'
 import type { ReportContext } from './context'
 import { STATE_LABEL, VERDICT_LABEL, formatDate, formatNumber, formatUtilisation, formatValue } from './format'
@@ -15,24 +15,38 @@ export interface StepView {
   title: string
   formula?: string
   substituted?: string
+  /** The value column: `1 894 N`, `0.992`, `met`. */
   result: string
+  /** Set for a strength check: its utilisation, for the glyph beside the value. */
+  utilisation?: number
+  /** The criterion the value is judged by, as TeX (`\le 10^{-9}`). */
+  criterion?: string
   source?: string
+  /** Where the inputs come from: `F_eye = 1 052 N, step 46`. */
+  from?: string
   verdict?: Step['verdict']
   verdictLabel?: string
   note?: string
 }
 
-export function stepView(n: number, step: Step): StepView {
+export function stepView(n: number, step: Step, numberOf?: Map<string, number>): StepView {
+  const isCheck = step.id.startsWith('chk.') && step.unit === '—' && typeof step.value === 'number'
+  const from = step.refs?.length
+    ? step.refs.map((r) => `${r.what}, step ${numberOf?.get(r.stepId) ?? r.stepId}`).join('; ')
+    : undefined
   return {
     n,
     id: step.id,
     title: step.title,
     formula: step.formula,
     substituted: step.substituted,
-    result: formatValue(step.value, step.unit),
+    result: isCheck ? formatUtilisation(step.value as number) : formatValue(step.value, step.unit),
+    utilisation: isCheck ? (step.value as number) : undefined,
+    criterion: step.criterion,
     source: step.source,
+    from,
     verdict: step.verdict,
-    verdictLabel: step.verdict ? VERDICT_LABEL[step.verdict] : undefined,
+    verdictLabel: step.verdict ? VERDICT_LABEL[step.verdict] || undefined : undefined,
     note: step.note,
   }
 }
@@ -44,6 +58,8 @@ export interface TableView {
   /** True where the column holds numbers and should align right. */
   numeric: boolean[]
   rows: string[][]
+  /** Rows to set in bold (e.g. the governing value). */
+  strong?: boolean[]
 }
 
 export function tableView(table: Table): TableView {
@@ -57,7 +73,7 @@ export function tableView(table: Table): TableView {
       table.columns.map((c) => {
         const v = row[c.key]
         if (v === null || v === undefined) return '—'
-        if (typeof v === 'number') return formatNumber(v, c.digits)
+        if (typeof v === 'number') return formatNumber(v)
         if (typeof v === 'boolean') return v ? 'yes' : 'no'
         return v
       }),
@@ -65,38 +81,141 @@ export function tableView(table: Table): TableView {
   }
 }
 
-export function checksTable(checks: CheckItem[], ctx: ReportContext): TableView {
+const stepRef = (ctx: ReportContext, id: string | undefined) => (id ? String(ctx.numberOf.get(id) ?? '—') : '—')
+
+/** Per component one row: its governing strength check, the utilisation, and the step with the working. */
+export function componentTable(checks: CheckItem[], ctx: ReportContext): TableView {
+  const components = [...new Set(checks.map((c) => c.component))]
+  const rows = components.map((name) => {
+    const own = checks.filter((c) => c.component === name && c.kind !== 'detailing')
+    const g = own.find((c) => c.governing) ?? own[0]
+    if (!g) return [name, '—', '—', '—', '—', '—', '—']
+    return [name, g.check, formatValue(g.demand, g.unit), formatValue(g.capacity, g.unit), formatUtilisation(g.utilisation), g.pass ? '' : 'fails', stepRef(ctx, g.stepId)]
+  })
   return {
-    id: 'checks-summary',
-    title: 'Component checks',
-    headers: ['Step', 'Component', 'Check', 'Clause', 'Demand', 'Capacity', 'u', ''],
-    numeric: [true, false, false, false, true, true, true, false],
-    rows: checks.map((c) => [
-      String(ctx.numberOf.get(c.stepId) ?? '—'),
-      c.component,
-      // The basis is stated once in the design basis; the governing check of each component is named.
-      c.governing ? `${c.check} — governs` : c.check,
-      c.clause,
-      formatValue(c.demand, c.unit),
-      formatValue(c.capacity, c.unit),
-      formatUtilisation(c.utilisation),
-      c.pass ? 'PASS' : 'FAIL',
-    ]),
+    id: 'components',
+    title: 'Governing check of each component',
+    headers: ['component', 'governing check', 'demand E_d', 'resistance R_d', 'u', '', 'step'],
+    numeric: [false, false, true, true, true, false, true],
+    rows,
   }
+}
+
+/** Dimensional rules: met or not met, never a utilisation. */
+export function detailingTable(checks: CheckItem[], ctx: ReportContext): TableView | null {
+  const rules = checks.filter((c) => c.kind === 'detailing')
+  if (!rules.length) return null
+  return {
+    id: 'detailing',
+    title: 'Detailing rules',
+    headers: ['component', 'rule', 'required', 'provided', '', 'step'],
+    numeric: [false, false, true, true, false, true],
+    rows: rules.map((c) => [c.component, c.check, formatValue(c.demand, c.unit), formatValue(c.capacity, c.unit), c.pass ? 'met' : 'not met', stepRef(ctx, c.stepId)]),
+  }
+}
+
+/** What the verdict rests on besides strength: stroke, straightness, transmission angle, detailing. */
+export function criteriaTable(ctx: ReportContext): TableView | null {
+  const r = ctx.pkg.result
+  const rows: string[][] = (r.criteria ?? []).map((c) => [c.label, c.required, c.provided, c.pass ? 'met' : 'not met', stepRef(ctx, c.stepId)])
+  const rules = (r.checks ?? []).filter((c) => c.kind === 'detailing')
+  if (rules.length) {
+    const failed = rules.filter((c) => !c.pass)
+    rows.push(['Detailing rules (table in the component checks)', `${rules.length} rules`, failed.length ? `${failed.length} not met` : 'all met', failed.length ? 'not met' : 'met', stepRef(ctx, (failed[0] ?? rules[0]).stepId)])
+  }
+  const v = r.verdict
+  if (v && (r.checks?.length ?? 0) > 0) {
+    rows.push(['Largest utilisation of a strength check', 'u ≤ 1', `u = ${formatUtilisation(v.maxUtilisation)}`, v.maxUtilisation <= 1 + 1e-9 ? 'met' : 'not met', stepRef(ctx, v.governingStepId)])
+  }
+  if (!rows.length) return null
+  return { id: 'criteria', title: 'What the verdict rests on', headers: ['criterion', 'required', 'provided', '', 'step'], numeric: [false, true, true, false, true], rows }
+}
+
+export function materialsTable(pkg: ReportPackage): TableView | null {
+  const m = pkg.result.materials ?? []
+  if (!m.length) return null
+  return {
+    id: 'materials',
+    title: 'Materials',
+    headers: ['material', 'used for', 'band', 'f_y [MPa]', 'f_u [MPa]', 'E [MPa]', 'source as stored'],
+    numeric: [false, false, false, true, true, true, false],
+    rows: m.map((r) => [r.id, r.usedFor.join(', '), r.band, formatNumber(r.fy), formatNumber(r.fu), formatNumber(r.E), r.source]),
+  }
+}
+
+/** The crank angles where any envelope value of a load case occurs, ascending. */
+function governingAngles(env: LoadCaseEnvelope): number[] {
+  const angles = new Set<number>()
+  for (const l of Object.values(env.links)) {
+    if (l.maxTension.value !== 0) angles.add(l.maxTension.crankDeg)
+    if (l.maxCompression.value !== 0) angles.add(l.maxCompression.crankDeg)
+    if (l.maxMoment) angles.add(l.maxMoment.crankDeg)
+  }
+  for (const p of Object.values(env.pins)) angles.add(p.crankDeg)
+  for (const e of Object.values(env.eyes ?? {})) angles.add(e.crankDeg)
+  for (const r of Object.values(env.reactions ?? {})) angles.add(r.crankDeg)
+  angles.add(env.driveTorque.crankDeg)
+  return [...angles].sort((a, b) => a - b)
+}
+
+/**
+ * Per load case one table of the positions where something governs: crank angle, tracer, every link
+ * force, every pin resultant and eye force, the pivot reactions and the drive torque; the last column is
+ * the largest value over the working range, which the checks use.
+ */
+export function governingTables(ctx: ReportContext): TableView[] {
+  const r = ctx.pkg.result
+  const cases = r.loadCases ?? []
+  return (r.envelope ?? []).flatMap((env, i) => {
+    const positions = cases.find((c) => c.name === env.loadCase)?.positions ?? cases[i]?.positions ?? []
+    if (!positions.length) return []
+    let angles = governingAngles(env)
+    // Keep the table on the page: at most six positions (the ends and the most frequent governors).
+    if (angles.length > 6) angles = [angles[0], ...angles.slice(1, -1).slice(0, 4), angles[angles.length - 1]]
+    const at = angles.map((a) => positions.reduce((best, p) => (Math.abs(p.crankDeg - a) < Math.abs(best.crankDeg - a) ? p : best), positions[0]))
+    const row = (label: string, unit: string, get: (p: PositionResult) => number | undefined, largest: number | undefined): string[] => [
+      label,
+      unit,
+      ...at.map((p) => {
+        const v = clean(get(p))
+        return v === undefined ? '—' : formatNumber(v)
+      }),
+      largest === undefined ? '' : formatNumber(largest),
+    ]
+    // Solver noise (1e-13 N in a link that carries nothing) prints as 0, as the envelope reports it.
+    const noise = 1e-9 * Math.max(1, ...Object.values(env.pins).map((p) => p.value))
+    const clean = (v: number | undefined) => (v !== undefined && Math.abs(v) < noise ? 0 : v)
+    const rows: string[][] = [row('tracer y_T', 'mm', (p) => p.tracer.y, undefined)]
+    for (const [name, l] of Object.entries(env.links)) {
+      const gov = l.maxTension.value >= -l.maxCompression.value ? l.maxTension.value : l.maxCompression.value
+      rows.push(row(`axial force N_${name}`, 'N', (p) => p.linkForces[name], gov))
+      if (l.maxMoment) rows.push(row(`moment M_${name}`, 'N·mm', (p) => p.linkMoments?.[name], l.maxMoment.value))
+    }
+    for (const [name, e] of Object.entries(env.eyes ?? {})) {
+      if (e.across > 0) rows.push(row(`eye force F_eye,${name} (across)`, 'N', () => undefined, e.value))
+    }
+    for (const [j, p] of Object.entries(env.pins)) rows.push(row(`pin force F_${j}`, 'N', (q) => q.pinForces[j]?.magnitude, p.value))
+    for (const [g, x] of Object.entries(env.reactions ?? {})) rows.push(row(`reaction at ${g}`, 'N', (q) => q.reactions[g]?.magnitude, x.value))
+    rows.push(row('drive torque τ', 'N·mm', (p) => p.driveTorque, env.driveTorque.value))
+    return [
+      {
+        id: `governing-${env.slug ?? i}`,
+        title: `Load case “${env.loadCase}”: the positions where a value governs`,
+        headers: ['quantity', 'unit', ...at.map((p) => `θ = ${formatNumber(p.crankDeg)}°`), 'largest'],
+        numeric: [false, false, ...at.map(() => true), true],
+        rows,
+      },
+    ]
+  })
 }
 
 export function inputsTable(pkg: ReportPackage): TableView {
   return {
     id: 'inputs',
     title: 'Inputs',
-    headers: ['Group', 'Quantity', 'Value', 'Unit'],
+    headers: ['group', 'quantity', 'value', 'unit'],
     numeric: [false, false, true, false],
-    rows: pkg.inputRows.map((r) => [
-      r.group,
-      r.label,
-      typeof r.value === 'number' ? formatNumber(r.value) : r.value,
-      r.unit || '—',
-    ]),
+    rows: pkg.inputRows.map((r) => [r.group, r.label, typeof r.value === 'number' ? formatNumber(r.value) : r.value, r.unit || '—']),
   }
 }
 
@@ -104,7 +223,7 @@ export function historyTable(pkg: ReportPackage): TableView {
   return {
     id: 'history',
     title: 'Revision history',
-    headers: ['Rev', 'State', 'Date', 'Note'],
+    headers: ['rev', 'state', 'date', 'note'],
     numeric: [false, false, false, false],
     rows: pkg.history.map((h) => [h.label, STATE_LABEL[h.state], formatDate(h.date), h.note]),
   }
@@ -114,7 +233,7 @@ export function remarksTable(pkg: ReportPackage, ctx: ReportContext): TableView 
   return {
     id: 'remarks',
     title: 'Remarks log',
-    headers: ['Step', 'Date', 'By', 'Remark', 'Status'],
+    headers: ['step', 'date', 'by', 'remark', 'status'],
     numeric: [false, false, false, false, false],
     rows: pkg.remarks.map((r) => [
       r.stepId ? `${ctx.numberOf.get(r.stepId) ?? '—'} · ${r.stepId}` : 'general',
@@ -136,8 +255,9 @@ export function cautions(pkg: ReportPackage): string[] {
   return [CAUTION_BASE, ...(f && !f.ok ? [f.message] : []), ...own]
 }
 
-/** Template references first, then every distinct source the steps and checks cite. */
+/** The mechanism's references (template), the codes and material standards the inputs call for, then every other source cited. */
 export function references(ctx: ReportContext): { template: string[]; cited: string[] } {
+  const template = [...ctx.meta.references.map((r) => r.text), ...(ctx.pkg.result.basis?.references ?? [])]
   const cited: string[] = []
   const seen = new Set<string>()
   const push = (s: string | undefined) => {
@@ -145,9 +265,9 @@ export function references(ctx: ReportContext): { template: string[]; cited: str
     seen.add(s)
     cited.push(s)
   }
-  for (const s of ctx.pkg.result.steps) push(s.source)
-  for (const c of ctx.pkg.result.checks ?? []) push(c.clause)
-  return { template: ctx.meta.references.map((r) => r.text), cited }
+  // Codes, clauses and books the steps follow; plain words (geometry, input, statics) are not citations.
+  for (const s of ctx.pkg.result.steps) if (s.source && /§|Table|Eq\.|Fig\.|Shigley|Coxeter|Kempe|AISC|EN \d/.test(s.source)) push(s.source.replace(/^(per )?/, ''))
+  return { template, cited }
 }
 
 export interface SignatoryView {
@@ -165,13 +285,26 @@ export function signatories(pkg: ReportPackage): SignatoryView[] {
   ]
 }
 
-export function verdictView(pkg: ReportPackage): { pass: boolean; headline: string; detail: string } | null {
+export interface VerdictView {
+  pass: boolean
+  headline: string
+  /** The governing strength check, its utilisation and its step. */
+  governing: string | null
+  utilisation: number | null
+  unmet: string[]
+}
+
+export function verdictView(pkg: ReportPackage, ctx?: ReportContext): VerdictView | null {
   const v = pkg.result.verdict
   if (!v) return null
+  const step = v.governingStepId ? ctx?.numberOf.get(v.governingStepId) : undefined
+  const hasChecks = (pkg.result.checks?.length ?? 0) > 0
   return {
     pass: v.pass,
-    headline: v.pass ? 'All checks pass' : 'One or more checks fail',
-    detail: `Largest utilisation ${formatUtilisation(v.maxUtilisation)} — ${v.governing}`,
+    headline: v.pass ? 'The guide meets every criterion of this calculation.' : 'The guide does not meet every criterion of this calculation.',
+    governing: hasChecks ? `Governing strength check: ${v.governing}${step ? ` (step ${step})` : ''}` : v.governing,
+    utilisation: hasChecks ? v.maxUtilisation : null,
+    unmet: v.unmet ?? [],
   }
 }
 
@@ -185,13 +318,14 @@ export function titleView(pkg: ReportPackage, resultHash: string): TitleView {
   return {
     title: pkg.calc.title,
     rows: [
-      ['Project', `${pkg.project.code} — ${pkg.project.name}`],
-      ['Client', pkg.project.client],
-      ['Calculation', `${pkg.calc.number} (${mechanismLabel(pkg.calc.type)})`],
+      ['project', `${pkg.project.code} — ${pkg.project.name}`],
+      ['client', pkg.project.client],
+      ['calculation', `${pkg.calc.number}, ${mechanismLabel(pkg.calc.type)}`],
       // The state is not printed here: it changes as the revision is signed (the title block carries it).
-      ['Revision', pkg.revision.label],
-      ['Generated', `${formatDate(pkg.generatedAt)} · engine ${pkg.engineVersion} · template ${pkg.templateVersion}`],
-      ['Result SHA-256', resultHash],
+      ['revision', pkg.revision.label],
+      ['basis', pkg.result.basis?.label ?? '—'],
+      ['generated', `${formatDate(pkg.generatedAt)} · engine ${pkg.engineVersion} · template ${pkg.templateVersion}`],
+      ['result SHA-256', resultHash],
     ],
   }
 }

@@ -7,14 +7,21 @@
 import { Children, Fragment, isValidElement, type ReactElement, type ReactNode } from 'react'
 import { Text, View } from '@react-pdf/renderer'
 import type { ReportComponentProps, ReportComponents } from '../components'
-import { backMatterSections } from '../model/back-matter'
+import { attachmentLetter, backMatterSections } from '../model/back-matter'
+import { tableView } from '../model/views'
+import type { ReportContext } from '../model/context'
+import { PdfTable } from './table'
 import { useReport } from '../model/react-context'
 import * as B from './blocks'
 import { PdfPage, SectionHead } from './frame'
 import { MathBlock } from './math'
 import { A, Code, Em, H2, H3, LI, MathInline, OL, P, Strong, UL } from './prose'
 import { PdfOtherSteps, PdfStep, PdfSteps } from './steps'
-import { segmentBody } from './flow'
+import { HEAD, HEAD_GAP, blockHeight, segmentBody } from './flow'
+import { lineCount, pageBudget } from './measure'
+import { registerBlockHeight } from './flow'
+import { BODY_SIZE, LINE, contentWidth } from './styles'
+import { SANS } from './fonts'
 import { C } from './styles'
 
 type SectionProps = ReportComponentProps['Section']
@@ -34,7 +41,7 @@ function Appendices() {
       <Text style={{ marginBottom: 6 }}>The following documents are attached after this page, in this order.</Text>
       {pkg.attachments.map((a, i) => (
         <View key={i} style={{ flexDirection: 'row', marginBottom: 2 }}>
-          <Text style={{ width: 70, fontWeight: 700 }}>{`Appendix ${String.fromCharCode(65 + i)}`}</Text>
+          <Text style={{ width: 70, fontWeight: 700 }}>{`Appendix ${attachmentLetter(pkg, i)}`}</Text>
           <Text style={{ flex: 1 }}>{a.name}</Text>
           <Text style={{ color: C.muted }}>{`${appendixPages[i] ?? '?'} page(s)`}</Text>
         </View>
@@ -43,7 +50,36 @@ function Appendices() {
   )
 }
 
-const BACK_BODY: Record<string, () => ReactNode> = {
+/**
+ * The package's appendix: the steps the body leaves out (envelopes, the full working of components
+ * identical to one shown in full), then the sweep tables, as direct children so the wrapper can cut
+ * them into pages.
+ */
+function workingBody(ctx: ReportContext): ReactNode {
+  const out: ReactNode[] = [
+    <Text key="intro" style={{ marginBottom: 6 }}>
+      The steps below support the body: the envelope of every load case over the working range, and the full working of components identical to one shown in full there. Their numbers follow the body's. The sweep tables list every solved position.
+    </Text>,
+  ]
+  for (const [section, list] of ctx.appendixBySection) {
+    if (!list.length) continue
+    out.push(<Text key={`h-${section}`} style={{ fontSize: 9.4, fontWeight: 700, marginTop: 4, marginBottom: 3 }} minPresenceAhead={60}>{APPENDIX_HEADS[section] ?? section}</Text>)
+    out.push(<PdfSteps key={`s-${section}`} section={section} appendix />)
+  }
+  for (const t of (ctx.pkg.result.tables ?? []).filter((x) => x.id.startsWith('tab.sweep'))) out.push(<PdfTable key={t.id} view={tableView(t)} size={6.6} />)
+  return out
+}
+
+const APPENDIX_HEADS: Record<string, string> = {
+  geometry: 'Geometry',
+  kinematics: 'Kinematics',
+  verification: 'Verification',
+  statics: 'Statics: envelopes over the working range',
+  checks: 'Component checks: the other steps',
+}
+
+const BACK_BODY: Record<string, (ctx: ReportContext) => ReactNode> = {
+  working: (ctx) => workingBody(ctx),
   'further-steps': () => <PdfOtherSteps />,
   references: () => <B.References />,
   cautions: () => <B.Cautions />,
@@ -57,7 +93,7 @@ const BACK_BODY: Record<string, () => ReactNode> = {
 interface Placed {
   id: string
   title: string
-  number: number
+  number: number | string
   continues: boolean
   body: ReactNode
 }
@@ -96,18 +132,29 @@ function Paginate({ children, document }: { children?: ReactNode; document: (pag
       if (n) placed.push({ id: p.id, title: p.title, number: n, continues: p.page === 'continue', body: p.children })
     } else if (child.type === BackMatter) {
       for (const sec of backMatterSections(ctx, ctx.numbering.backMatterStart)) {
-        placed.push({ ...sec, body: BACK_BODY[sec.id]() })
+        placed.push({ ...sec, body: BACK_BODY[sec.id](ctx) })
       }
     }
   }
   const pages: PageItem[][] = []
+  const budget = pageBudget(ctx.pkg.paper)
+  let used: number | null = null
   for (const sec of placed) {
-    const startsPage = !(sec.continues && pages.length)
-    const [first, ...rest] = segmentBody(sec.body, ctx, startsPage)
+    let startsPage = !(sec.continues && pages.length)
+    const kids = Children.toArray(sec.body)
+    // A continuing section whose heading and first block do not fit what is left starts a page.
+    if (!startsPage) {
+      const first = kids.length ? blockHeight(kids[0], ctx) : 0
+      if (used === null || first === null || used + HEAD_GAP + HEAD + first > budget) startsPage = true
+    }
+    const headUsed = startsPage ? HEAD : (used as number) + HEAD_GAP + HEAD
+    const { segments, used: after } = segmentBody(sec.body, ctx, headUsed)
+    const [first, ...rest] = segments
     const item: PageItem = { key: sec.id, head: sec, body: first }
     if (startsPage) pages.push([item])
     else pages[pages.length - 1].push(item)
     rest.forEach((body, i) => pages.push([{ key: `${sec.id}-${i + 1}`, body }]))
+    used = after
   }
   return document(
     pages.map((items) => (
@@ -122,6 +169,12 @@ function Paginate({ children, document }: { children?: ReactNode; document: (pag
     )),
   )
 }
+
+// Plain Text blocks of the back matter: their words at body size.
+registerBlockHeight(Text, (el, ctx) => {
+  const text = (Array.isArray(el.props.children) ? el.props.children : [el.props.children]).filter((c) => typeof c === 'string').join(' ')
+  return lineCount([{ text, size: BODY_SIZE, face: { family: SANS } }], contentWidth(ctx.pkg.paper)) * BODY_SIZE * LINE + 8
+})
 
 export function pdfWrapper(document: (pages: ReactNode) => ReactNode) {
   return function Wrapper({ children }: { children?: ReactNode }) {
@@ -138,6 +191,11 @@ export const pdfReportComponents: ReportComponents = {
   OtherSteps: PdfOtherSteps,
   ResultsTable: B.ResultsTable,
   ChecksTable: B.ChecksTable,
+  Criteria: B.Criteria,
+  DesignBasis: B.DesignBasis,
+  Assumptions: B.Assumptions,
+  MaterialsTable: B.MaterialsTable,
+  GoverningTables: B.GoverningTables,
   Figure: B.Figure,
   Plot: B.Plot,
   UtilisationChart: B.UtilisationChart,

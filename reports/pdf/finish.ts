@@ -10,21 +10,23 @@
 import { readFile } from 'node:fs/promises'
 import path from 'node:path'
 import fontkit from '@pdf-lib/fontkit'
-import { PDFDocument, degrees, rgb, type PDFFont, type PDFPage } from 'pdf-lib'
+import { PDFArray, PDFDict, PDFDocument, PDFHexString, PDFName, PDFNumber, PDFRef, PDFString, degrees, rgb, type PDFFont, type PDFPage } from 'pdf-lib'
+import { attachmentLetter } from '../model/back-matter'
 import { STATE_LABEL, formatDate, watermarkFor } from '../model/format'
 import type { Attachment, RenderOptions, ReportPackage } from '../types'
-import { FOOTER, HEADER_TOP, MARGIN_X, PAGE_SIZE, SIGN_OFF_ROLES, TITLE_CELL_AT, contentWidth } from './styles'
+import { titleCellText } from './frame'
+import { STEP } from './measure'
+import { BODY_BOTTOM, BODY_TOP, C, HEAD_RULE, MARGIN_X, OUTER_MARK, PAGE_SIZE, SIGN_OFF_CELLS, SIGN_OFF_ROLES, TITLE_BLOCK, TITLE_BLOCK_HEIGHT, contentWidth, titleCellAt, type TitleCellId } from './styles'
 
 export async function countPages(attachments: Attachment[]): Promise<number[]> {
   return Promise.all(attachments.map(async (a) => (await PDFDocument.load(a.bytes, { updateMetadata: false })).getPageCount()))
 }
 
 const hex = (h: string) => rgb(parseInt(h.slice(1, 3), 16) / 255, parseInt(h.slice(3, 5), 16) / 255, parseInt(h.slice(5, 7), 16) / 255)
-const INK = hex('#1d2a33')
-const MUTED = hex('#6b7780')
-const FAIL = hex('#b03a2e')
-const ACCENT = hex('#2f6f8f')
-const PASS = hex('#3d7a57')
+const INK = hex(C.ink)
+const MUTED = hex(C.muted)
+const RULE = hex(C.rule)
+const ACCENT = hex(C.accent)
 
 const fontBytes = new Map<string, Promise<Uint8Array>>()
 function font(opts: RenderOptions, file: string) {
@@ -36,13 +38,14 @@ function font(opts: RenderOptions, file: string) {
 interface Fonts {
   regular: PDFFont
   bold: PDFFont
+  italic: PDFFont
   mono: PDFFont
 }
 
-/** Text the Noto subset can encode; anything else becomes '?' rather than failing the stamp. */
+/** Text the Noto subset can encode; a minus the Sans lacks becomes a hyphen, anything else '?', rather than failing the stamp. */
 function safe(f: PDFFont, text: string): string {
   const set = new Set(f.getCharacterSet())
-  return [...text].map((c) => (set.has(c.codePointAt(0)!) ? c : '?')).join('')
+  return [...text].map((c) => (set.has(c.codePointAt(0)!) ? c : c === '\u2212' ? '-' : '?')).join('')
 }
 
 /** Simple flowing text for the record pages: wraps at `width`, starts a new page when one fills. */
@@ -61,7 +64,7 @@ class Writer {
     const [w, h] = PAGE_SIZE[this.pkg.paper]
     this.page = this.doc.addPage([w, h])
     this.onPage(this.page)
-    this.y = h - 96
+    this.y = h - BODY_TOP - 14
   }
   text(s: string, o: { size?: number; bold?: boolean; mono?: boolean; color?: ReturnType<typeof rgb>; indent?: number; gap?: number } = {}) {
     const size = o.size ?? 8.6
@@ -79,7 +82,7 @@ class Writer {
     }
     if (line) lines.push(line)
     for (const l of lines) {
-      if (this.y < 70) this.newPage()
+      if (this.y < BODY_BOTTOM + 6) this.newPage()
       this.page.drawText(l, { x: MARGIN_X + (o.indent ?? 0), y: this.y, size, font: f, color: o.color ?? INK })
       this.y -= size * 1.4
     }
@@ -91,36 +94,97 @@ class Writer {
   }
 }
 
-/** The sheet frame react-pdf draws on body pages, drawn again on the record pages (same geometry as frame.tsx). */
+/** The sheet frame react-pdf draws on body pages (frame.tsx), drawn from the same TITLE_BLOCK data on the pages added here. */
 function drawFrame(page: PDFPage, pkg: ReportPackage, f: Fonts) {
   const { width, height } = page.getSize()
   const cw = contentWidth(pkg.paper)
-  const top = height - HEADER_TOP
-  const rule = hex('#c9d2d8')
-  page.drawRectangle({ x: MARGIN_X, y: top - 46, width: cw, height: 46, borderColor: INK, borderWidth: 0.8 })
-  page.drawLine({ start: { x: MARGIN_X, y: top - 22.4 }, end: { x: MARGIN_X + cw, y: top - 22.4 }, thickness: 0.6, color: rule })
-  const cell = (k: string, v: string, from: number, to: number, y0: number) => {
-    page.drawText(k.toUpperCase(), { x: MARGIN_X + cw * from + 5, y: y0 - 7.5, size: 5.6, font: f.regular, color: MUTED })
-    if (v) page.drawText(safe(f.bold, v), { x: MARGIN_X + cw * from + 5, y: y0 - 18.4, size: 7.4, font: f.bold, color: INK, maxWidth: cw * (to - from) - 8 })
-    if (to < 1) page.drawLine({ start: { x: MARGIN_X + cw * to, y: y0 }, end: { x: MARGIN_X + cw * to, y: y0 - 22.4 }, thickness: 0.6, color: rule })
+  const T = TITLE_BLOCK
+  const top = T.bottom + TITLE_BLOCK_HEIGHT
+  page.drawLine({ start: { x: MARGIN_X, y: height - HEAD_RULE }, end: { x: width - MARGIN_X, y: height - HEAD_RULE }, thickness: 0.4, color: RULE })
+  page.drawLine({ start: { x: MARGIN_X, y: top }, end: { x: MARGIN_X + cw, y: top }, thickness: 0.9, color: INK })
+  page.drawLine({ start: { x: MARGIN_X, y: T.bottom }, end: { x: MARGIN_X + cw, y: T.bottom }, thickness: 0.9, color: INK })
+  page.drawLine({ start: { x: MARGIN_X, y: top - T.rowHeight }, end: { x: MARGIN_X + cw, y: top - T.rowHeight }, thickness: 0.4, color: RULE })
+  page.drawRectangle({ x: MARGIN_X, y: T.bottom, width: T.bar, height: TITLE_BLOCK_HEIGHT, color: ACCENT })
+  for (const c of T.cells) {
+    const at = titleCellAt(pkg.paper, c.id)
+    const pad = T.padX + (c.x0 === 0 ? T.bar : 0)
+    if (c.x0 > 0) page.drawLine({ start: { x: at.x, y: at.top }, end: { x: at.x, y: at.top - T.rowHeight }, thickness: 0.4, color: RULE })
+    page.drawText(c.label, { x: at.x + pad, y: at.top - T.labelBaseline, size: T.labelSize, font: f.italic, color: MUTED })
+    const v = titleCellText(pkg, c.id)
+    if (!v) continue
+    if (c.id === 'calc') {
+      const t = safe(f.bold, v)
+      page.drawText(t, { x: at.x + at.width - 4 - f.bold.widthOfTextAtSize(t, 12), y: at.top - 15.6, size: 12, font: f.bold, color: INK })
+    } else page.drawText(safe(f.bold, v), { x: at.x + pad, y: at.top - T.valueBaseline, size: T.valueSize, font: f.bold, color: INK, maxWidth: at.width - pad - 2 })
   }
-  const t = TITLE_CELL_AT
-  cell('Project', `${pkg.project.code} · ${pkg.project.name}`, 0, t.calc, top)
-  cell('Calculation', pkg.calc.number, t.calc, t.rev, top)
-  cell('Rev', pkg.revision.label, t.rev, t.state, top)
-  cell('State', '', t.state, t.page, top)
-  cell('Page', '', t.page, 1, top)
-  cell('Client', pkg.project.client, 0, t.title, top - 22.4)
-  cell('Title', pkg.calc.title, t.title, 1, top - 22.4)
-  const fy = FOOTER.bottom + FOOTER.height
-  page.drawLine({ start: { x: MARGIN_X, y: fy }, end: { x: width - MARGIN_X, y: fy }, thickness: 0.8, color: INK })
-  SIGN_OFF_ROLES.forEach((role, k) => page.drawText(role.toUpperCase(), { x: MARGIN_X + (k * cw) / (SIGN_OFF_ROLES.length + 1), y: fy - 9.5, size: 5.6, font: f.regular, color: MUTED }))
+  const mark = safe(f.regular, `${pkg.calc.number} · rev ${pkg.revision.label}`)
+  const mw = f.regular.widthOfTextAtSize(mark, OUTER_MARK.size)
+  page.drawText(mark, { x: width - OUTER_MARK.fromEdge + OUTER_MARK.size * 0.35, y: height / 2 - mw / 2, size: OUTER_MARK.size, font: f.regular, color: MUTED, rotate: degrees(90) })
+}
+
+/** Writes a value into a title-block cell (the cells sign-off owns). */
+function stampCell(page: PDFPage, pkg: ReportPackage, id: TitleCellId, text: string, font: PDFFont, color = INK, size: number = TITLE_BLOCK.valueSize) {
+  const c = TITLE_BLOCK.cells.find((x) => x.id === id)!
+  const at = titleCellAt(pkg.paper, id)
+  const pad = TITLE_BLOCK.padX + (c.x0 === 0 ? TITLE_BLOCK.bar : 0)
+  page.drawText(safe(font, text), { x: at.x + pad, y: at.top - TITLE_BLOCK.valueBaseline, size, font, color, maxWidth: at.width - pad - 2 })
+}
+
+/**
+ * Where each step box starts: react-pdf writes a named destination for every element with an id
+ * (`step-<id>`), [page /XYZ 0 y] with y measured from the page's top edge less its top padding.
+ */
+function stepPositions(doc: PDFDocument): Map<string, { page: number; top: number }> {
+  const out = new Map<string, { page: number; top: number }>()
+  const names = doc.catalog.lookupMaybe(PDFName.of('Names'), PDFDict)
+  const dests = names?.lookupMaybe(PDFName.of('Dests'), PDFDict)
+  if (!dests) return out
+  const pageIndex = new Map(doc.getPages().map((p, i) => [p.ref.toString(), i]))
+  const visit = (node: PDFDict) => {
+    const arr = node.lookupMaybe(PDFName.of('Names'), PDFArray)
+    if (arr) {
+      for (let i = 0; i + 1 < arr.size(); i += 2) {
+        const key = arr.lookup(i)
+        const name = key instanceof PDFString || key instanceof PDFHexString ? key.decodeText() : ''
+        const dest = arr.lookup(i + 1)
+        if (!name.startsWith('step-') || !(dest instanceof PDFArray)) continue
+        const ref = dest.get(0)
+        const y = dest.lookup(3)
+        const page = ref instanceof PDFRef ? pageIndex.get(ref.toString()) : undefined
+        if (page !== undefined && y instanceof PDFNumber) out.set(name.slice(5), { page, top: y.asNumber() - BODY_TOP })
+      }
+    }
+    const kids = node.lookupMaybe(PDFName.of('Kids'), PDFArray)
+    if (kids) for (let i = 0; i < kids.size(); i++) visit(kids.lookup(i, PDFDict))
+  }
+  visit(dests)
+  return out
+}
+
+/** A tick, the checker's initials and remark numbers in the checker column of each step box. */
+function stampChecks(pages: PDFPage[], pkg: ReportPackage, f: Fonts, at: Map<string, { page: number; top: number }>) {
+  const x = MARGIN_X + contentWidth(pkg.paper) - STEP.checkWidth + 2.5
+  const initials = (name: string) => name.split(/\s+/).filter(Boolean).map((w) => w[0]).join('').toUpperCase()
+  for (const t of pkg.signOff?.ticks ?? []) {
+    const p = at.get(t.stepId)
+    if (!p) continue
+    const page = pages[p.page]
+    const y = p.top - STEP.padY - 7
+    page.drawSvgPath('M0 3.2 L2.4 6 L7.6 0', { x, y: y + 6.4, borderColor: INK, borderWidth: 0.9, scale: 1 })
+    page.drawText(safe(f.regular, initials(t.by)), { x: x + 9, y: y + 0.6, size: 5.6, font: f.regular, color: INK })
+  }
+  pkg.remarks.forEach((r, i) => {
+    if (!r.stepId) return
+    const p = at.get(r.stepId)
+    if (!p) return
+    pages[p.page].drawText(`R${i + 1}`, { x, y: p.top - STEP.padY - 15, size: 5.8, font: f.bold, color: ACCENT })
+  })
 }
 
 /** The sign-off record: every signature with its statement, the issue block, ticks, remarks and confirmed material values. */
 function writeRecord(w: Writer, pkg: ReportPackage) {
   const so = pkg.signOff
-  w.text('Sign-off record', { size: 14, bold: true, color: ACCENT, gap: 6 })
+  w.text('Sign-off record', { size: 13, bold: true, color: INK, gap: 6 })
   if (so?.issue) {
     w.text('Issue', { size: 10.5, bold: true })
     w.text(`Issued ${so.issue.date} by ${so.issue.approver} as revision ${pkg.revision.label}.`)
@@ -144,7 +208,7 @@ function writeRecord(w: Writer, pkg: ReportPackage) {
   w.text('Revisions of this calc', { size: 10.5, bold: true })
   for (const h of pkg.history) w.text(`Rev ${h.label} — ${STATE_LABEL[h.state]} — ${formatDate(h.date)}${h.note ? ` — ${h.note}` : ''}`)
   w.rule()
-  w.text('Steps ticked as verified by the checker', { size: 10.5, bold: true })
+  w.text('Steps ticked as verified by the checker (also stamped in each step’s checker column)', { size: 10.5, bold: true })
   const ticks = so?.ticks ?? []
   if (ticks.length === 0) w.text('No step was ticked.', { color: MUTED })
   else w.text(ticks.map((t) => `${t.number ?? t.stepId} (${t.by}, ${t.date})`).join(' · '), { gap: 6 })
@@ -152,7 +216,7 @@ function writeRecord(w: Writer, pkg: ReportPackage) {
   w.text('Remarks', { size: 10.5, bold: true })
   if (pkg.remarks.length === 0) w.text('No remarks.', { color: MUTED })
   for (const r of pkg.remarks) {
-    w.text(`${r.stepId ? `At ${r.stepNumber ? `step ${r.stepNumber} (${r.stepId})` : r.stepId}` : 'Whole calc'} — ${r.status.toUpperCase()} — ${r.author}, ${r.date}`, { bold: true, size: 8 })
+    w.text(`R${pkg.remarks.indexOf(r) + 1} · ${r.stepId ? `at ${r.stepNumber ? `step ${r.stepNumber} (${r.stepId})` : r.stepId}` : 'whole calc'} — ${r.status} — ${r.author}, ${r.date}`, { bold: true, size: 8 })
     w.text(r.text, { indent: 12, gap: 4 })
   }
   if (so?.confirmations.length) {
@@ -204,7 +268,7 @@ function drawWatermark(page: PDFPage, text: string, fontData: Uint8Array) {
   // Rising at 40°, its middle on the page's centre.
   const x = width / 2 - (w / 2) * Math.cos(a) + (size / 3) * Math.sin(a)
   const y = height / 2 - (w / 2) * Math.sin(a) - (size / 3) * Math.cos(a)
-  page.drawSvgPath(o.d, { x, y, scale: size / 1000, color: FAIL, opacity: 0.13, borderWidth: 0, rotate: degrees(40) })
+  page.drawSvgPath(o.d, { x, y, scale: size / 1000, color: ACCENT, opacity: 0.12, borderWidth: 0, rotate: degrees(40) })
 }
 
 /**
@@ -216,13 +280,15 @@ export async function finishPdf(body: Uint8Array, pkg: ReportPackage, opts: Rend
   const out = await PDFDocument.load(body, { updateMetadata: false })
   out.registerFontkit(fontkit)
   const boldData = await font(opts, 'NotoSans-Bold.ttf')
-  const [regular, bold, mono] = await Promise.all([
+  const [regular, bold, italic, mono] = await Promise.all([
     font(opts, 'NotoSans-Regular.ttf').then((b) => out.embedFont(b, { subset: true })),
     out.embedFont(boldData, { subset: true }),
+    font(opts, 'NotoSans-Italic.ttf').then((b) => out.embedFont(b, { subset: true })),
     font(opts, 'NotoSansMono-Regular.ttf').then((b) => out.embedFont(b, { subset: true })),
   ])
-  const fonts = { regular, bold, mono }
+  const fonts = { regular, bold, italic, mono }
   const bodyPages = out.getPages()
+  const steps = stepPositions(out)
   const recordPages: PDFPage[] = []
   if (pkg.signOff) {
     const w = new Writer(out, fonts, pkg, (p) => {
@@ -231,39 +297,46 @@ export async function finishPdf(body: Uint8Array, pkg: ReportPackage, opts: Rend
     })
     writeRecord(w, pkg)
   }
-  const sources = await Promise.all(pkg.attachments.map((a) => PDFDocument.load(a.bytes, { updateMetadata: false })))
-  const total = bodyPages.length + recordPages.length + sources.reduce((n, d) => n + d.getPageCount(), 0)
+  // Attached documents go inside the sheet frame: each of their pages is scaled into the body area.
+  const [pw, ph] = PAGE_SIZE[pkg.paper]
+  const attached: PDFPage[] = []
+  for (const [i, a] of pkg.attachments.entries()) {
+    const src = await PDFDocument.load(a.bytes, { updateMetadata: false })
+    const embedded = await out.embedPdf(src, src.getPageIndices())
+    embedded.forEach((e, k) => {
+      const page = out.addPage([pw, ph])
+      drawFrame(page, pkg, fonts)
+      const boxTop = ph - BODY_TOP - 14
+      const boxH = boxTop - BODY_BOTTOM
+      const cw = contentWidth(pkg.paper)
+      const scale = Math.min(cw / e.width, boxH / e.height, 1)
+      const w = e.width * scale
+      const h = e.height * scale
+      page.drawText(safe(bold, `Appendix ${attachmentLetter(pkg, i)}: ${a.name} — its page ${k + 1} of ${embedded.length}`), { x: MARGIN_X, y: ph - BODY_TOP - 4, size: 8.4, font: bold, color: INK, maxWidth: cw })
+      page.drawRectangle({ x: MARGIN_X + (cw - w) / 2, y: boxTop - h, width: w, height: h, borderColor: RULE, borderWidth: 0.4 })
+      page.drawPage(e, { x: MARGIN_X + (cw - w) / 2, y: boxTop - h, xScale: scale, yScale: scale })
+      attached.push(page)
+    })
+  }
+  const total = bodyPages.length + recordPages.length + attached.length
 
-  const cw = contentWidth(pkg.paper)
   const mark = watermarkFor(pkg.revision.state)
   const r = pkg.revision
   const signers = [r.engineer, r.checker, r.approver]
-  const state = safe(bold, STATE_LABEL[r.state])
-  const stateColour = r.state === 'issued' ? PASS : ['returned', 'voided', 'withdrawn', 'superseded'].includes(r.state) ? FAIL : INK
-  ;[...bodyPages, ...recordPages].forEach((page, i) => {
-    const { height } = page.getSize()
-    const top = height - HEADER_TOP - TITLE_CELL_AT.baseline
-    page.drawText(`${i + 1} of ${total}`, { x: MARGIN_X + cw * TITLE_CELL_AT.page + 4, y: top, size: 7.2, font: bold, color: INK })
-    page.drawText(state, { x: MARGIN_X + cw * TITLE_CELL_AT.state + 4, y: top, size: 7.2, font: bold, color: stateColour })
-    const colW = cw / (SIGN_OFF_ROLES.length + 1)
-    signers.forEach((sg, k) => {
+  const state = STATE_LABEL[r.state]
+  const stateColour = ['returned', 'voided', 'withdrawn', 'superseded'].includes(r.state) ? ACCENT : INK
+  stampChecks(bodyPages, pkg, fonts, steps)
+  ;[...bodyPages, ...recordPages, ...attached].forEach((page, i) => {
+    stampCell(page, pkg, 'sheet', `${i + 1} of ${total}`, bold)
+    stampCell(page, pkg, 'state', state, bold, stateColour)
+    SIGN_OFF_ROLES.forEach((role, k) => {
+      const sg = signers[k]
       const text = sg.date ? `${sg.name} · ${formatDate(sg.date)}` : sg.name === '—' ? '—' : `${sg.name} · not signed`
-      page.drawText(safe(regular, text), { x: MARGIN_X + k * colW, y: FOOTER.bottom + FOOTER.height - 17.5, size: 7, font: regular, color: INK, maxWidth: colW - 4 })
+      stampCell(page, pkg, SIGN_OFF_CELLS[role], text, regular, INK, 6.6)
     })
-    if (pkg.signOff?.issue) page.drawText(`Issued · code ${pkg.signOff.issue.code}`, { x: MARGIN_X, y: FOOTER.bottom - 9, size: 6.4, font: mono, color: MUTED })
+    if (pkg.signOff?.issue) page.drawText(`issued · verification code ${pkg.signOff.issue.code}`, { x: MARGIN_X, y: TITLE_BLOCK.bottom - 9, size: 6.2, font: mono, color: MUTED })
     if (mark) drawWatermark(page, mark, boldData)
   })
-
-  let pageNo = bodyPages.length + recordPages.length
-  for (const [i, src] of sources.entries()) {
-    const pages = await out.copyPages(src, src.getPageIndices())
-    for (const page of pages) {
-      out.addPage(page)
-      pageNo += 1
-      const stamp = `${pkg.calc.number} rev ${r.label} - Appendix ${String.fromCharCode(65 + i)}: ${pkg.attachments[i].name} - page ${pageNo} of ${total}`
-      page.drawText(safe(regular, stamp), { x: 24, y: 12, size: 7, font: regular, color: MUTED, maxWidth: page.getSize().width - 48 })
-    }
-  }
   out.setCreationDate(date)
   out.setModificationDate(date)
   return out.save({ useObjectStreams: false })

@@ -1,72 +1,82 @@
 /**
- * Every PDF page: the title block on top and the sign-off strip at the bottom.
- * What changes as a revision moves through sign-off — its state, the checker's
- * and approver's names and dates, the watermark, the page numbers — is left
- * out here and stamped by finishPdf, so signing never renders the body again.
- * A <Page> holds one section or a few short ones, which keeps react-pdf's
- * layout cost linear.
+ * Every PDF sheet: a hairline at the head, the title block at the foot (drawn from TITLE_BLOCK in
+ * styles.ts, the same data finish.ts draws and stamps from) and the calc number with its revision
+ * along the outer margin. What changes as a revision moves through sign-off — its state, the names
+ * and dates, the watermark, the sheet numbers — is left empty here and stamped by finishPdf, so
+ * signing never renders the body again. A <Page> holds one section or a few short ones, which keeps
+ * react-pdf's layout cost linear.
  */
 import type { ReactNode } from 'react'
 import { Page, Text, View } from '@react-pdf/renderer'
-import { formatDate } from '../model/format'
 import { sectionAnchor } from '../model/context'
 import { useReport } from '../model/react-context'
-import { C, FOOTER, HEADER_TOP, MARGIN_X, SIGN_OFF_ROLES, TITLE_CELLS, s } from './styles'
+import type { ReportPackage } from '../types'
+import { C, HEAD_RULE, MARGIN_X, OUTER_MARK, PAGE_SIZE, TITLE_BLOCK, TITLE_BLOCK_HEIGHT, s } from './styles'
 
-const label = { fontSize: 5.6, color: C.muted, letterSpacing: 0.3, lineHeight: 1.2 }
-const value = { fontSize: 7.4, fontWeight: 700 as const, lineHeight: 1.25 }
-
-function Cell({ k, v, flex, last }: { k: string; v?: string; flex: number; last?: boolean }) {
-  return (
-    <View style={{ flex, height: 22, paddingHorizontal: 5, paddingTop: 2.5, borderRightWidth: last ? 0 : 0.6, borderRightColor: C.rule }}>
-      <Text style={label}>{k.toUpperCase()}</Text>
-      {v ? <Text style={value}>{v}</Text> : null}
-    </View>
-  )
+/** Static text of a title-block cell (empty for the cells sign-off stamps). */
+export function titleCellText(pkg: ReportPackage, id: string): string {
+  switch (id) {
+    case 'project':
+      return `${pkg.project.code} · ${pkg.project.name}`
+    case 'calc':
+      return pkg.calc.number
+    case 'rev':
+      return pkg.revision.label
+    case 'title':
+      return pkg.calc.title
+    default:
+      return ''
+  }
 }
 
-function Header() {
+const labelStyle = { fontSize: TITLE_BLOCK.labelSize, fontStyle: 'italic' as const, color: C.muted, lineHeight: 1 }
+
+function TitleBlock() {
   const { pkg } = useReport()
+  const h = TITLE_BLOCK.rowHeight
   return (
-    <View fixed style={{ position: 'absolute', top: HEADER_TOP, left: MARGIN_X, right: MARGIN_X, height: 46, borderWidth: 0.8, borderColor: C.ink }}>
-      <View style={{ flexDirection: 'row', height: 22.4, borderBottomWidth: 0.6, borderBottomColor: C.rule }}>
-        <Cell k="Project" v={`${pkg.project.code} · ${pkg.project.name}`} flex={TITLE_CELLS.project} />
-        <Cell k="Calculation" v={pkg.calc.number} flex={TITLE_CELLS.calc} />
-        <Cell k="Rev" v={pkg.revision.label} flex={TITLE_CELLS.rev} />
-        {/* State and page number are stamped by finishPdf, keeping every page static for react-pdf. */}
-        <Cell k="State" flex={TITLE_CELLS.state} />
-        <Cell k="Page" flex={TITLE_CELLS.page} last />
-      </View>
-      <View style={{ flexDirection: 'row', height: 22 }}>
-        <Cell k="Client" v={pkg.project.client} flex={3} />
-        <Cell k="Title" v={pkg.calc.title} flex={4.1} last />
-      </View>
+    <View fixed style={{ position: 'absolute', bottom: TITLE_BLOCK.bottom, left: MARGIN_X, right: MARGIN_X, height: TITLE_BLOCK_HEIGHT, borderTopWidth: 0.9, borderBottomWidth: 0.9, borderColor: C.ink }}>
+      <View style={{ position: 'absolute', left: 0, top: 0, bottom: 0, width: TITLE_BLOCK.bar, backgroundColor: C.accent }} />
+      <View style={{ position: 'absolute', left: 0, right: 0, top: h, height: 0, borderTopWidth: 0.4, borderTopColor: C.rule }} />
+      {TITLE_BLOCK.cells.map((c) => {
+        const v = titleCellText(pkg, c.id)
+        const big = c.id === 'calc'
+        return (
+          <View key={c.id} style={{ position: 'absolute', top: c.row * h, height: h, left: `${c.x0 * 100}%`, width: `${(c.x1 - c.x0) * 100}%`, paddingLeft: TITLE_BLOCK.padX + (c.x0 === 0 ? TITLE_BLOCK.bar : 0), borderLeftWidth: c.x0 === 0 ? 0 : 0.4, borderLeftColor: C.rule }}>
+            <Text style={{ ...labelStyle, position: 'absolute', top: TITLE_BLOCK.labelBaseline - TITLE_BLOCK.labelSize * 0.8, left: TITLE_BLOCK.padX + (c.x0 === 0 ? TITLE_BLOCK.bar : 0) }}>{c.label}</Text>
+            {v ? (
+              <Text style={{ position: 'absolute', top: big ? 5 : TITLE_BLOCK.valueBaseline - TITLE_BLOCK.valueSize * 0.9, right: big ? 4 : undefined, left: big ? undefined : TITLE_BLOCK.padX + (c.x0 === 0 ? TITLE_BLOCK.bar : 0), fontSize: big ? 12 : TITLE_BLOCK.valueSize, fontWeight: 700, lineHeight: 1, maxLines: 1 }}>{v}</Text>
+            ) : null}
+          </View>
+        )
+      })}
     </View>
   )
 }
 
-function Footer() {
+function Head() {
+  return <View fixed style={{ position: 'absolute', top: HEAD_RULE, left: MARGIN_X, right: MARGIN_X, height: 0, borderTopWidth: 0.4, borderTopColor: C.rule }} />
+}
+
+/** Calc number and revision along the outer margin, reading upward. */
+function OuterMark() {
   const { pkg } = useReport()
+  const [w, h] = PAGE_SIZE[pkg.paper]
+  const len = 240
   return (
-    <View fixed style={{ position: 'absolute', bottom: FOOTER.bottom, left: MARGIN_X, right: MARGIN_X, height: FOOTER.height, borderTopWidth: 0.8, borderTopColor: C.ink, flexDirection: 'row', paddingTop: 3 }}>
-      {/* Names and dates are stamped by finishPdf as the revision is signed. */}
-      {SIGN_OFF_ROLES.map((role) => (
-        <View key={role} style={{ flex: 1 }}>
-          <Text style={label}>{role.toUpperCase()}</Text>
-        </View>
-      ))}
-      <View style={{ flex: 1, alignItems: 'flex-end' }}>
-        <Text style={label}>{`GENERATED ${formatDate(pkg.generatedAt)}`}</Text>
-        <Text style={{ fontSize: 6.4, color: C.muted, lineHeight: 1.25 }}>{`engine ${pkg.engineVersion} · ${pkg.templateVersion}`}</Text>
-      </View>
-    </View>
+    <Text
+      fixed
+      style={{ position: 'absolute', left: w - OUTER_MARK.fromEdge - len / 2, top: h / 2 - OUTER_MARK.size / 2, width: len, textAlign: 'center', fontSize: OUTER_MARK.size, color: C.muted, letterSpacing: 0.6, lineHeight: 1, transform: 'rotate(-90deg)' }}
+    >
+      {`${pkg.calc.number} · rev ${pkg.revision.label}`}
+    </Text>
   )
 }
 
-export function SectionHead({ id, number, title, first }: { id: string; number: number; title: string; first: boolean }) {
+export function SectionHead({ id, number, title, first }: { id: string; number: number | string; title: string; first: boolean }) {
   return (
     // Bookmarks work on any node at runtime; react-pdf's types only list them on Page.
-    <View style={[s.sectionHead, first ? {} : { marginTop: 16 }]} minPresenceAhead={80} id={sectionAnchor(id)} {...({ bookmark: { title: `${number}  ${title}`, fit: true } } as object)}>
+    <View style={[s.sectionHead, first ? {} : { marginTop: 14 }]} minPresenceAhead={90} id={sectionAnchor(id)} {...({ bookmark: { title: `${number}  ${title}`, fit: true } } as object)}>
       <Text style={s.sectionNum}>{String(number)}</Text>
       <Text style={s.sectionTitle}>{title}</Text>
     </View>
@@ -77,9 +87,10 @@ export function PdfPage({ children }: { children?: ReactNode }) {
   const { pkg } = useReport()
   return (
     <Page size={pkg.paper} style={s.page}>
-      <Header />
+      <Head />
       {children}
-      <Footer />
+      <OuterMark />
+      <TitleBlock />
     </Page>
   )
 }

@@ -13,31 +13,29 @@
 import { Font } from '@react-pdf/renderer'
 import type { StepView } from '../model/views'
 import { texToShape } from './math-shape'
-import { MONO, SANS } from './fonts'
+import { SANS } from './fonts'
 import { BODY_BOTTOM, BODY_SIZE, BODY_TOP, LINE, PAGE_SIZE, contentWidth } from './styles'
 import type { Paper } from '../types'
 
 /** Layout constants of PdfStepBox, shared so the box and its estimate cannot drift apart. */
 export const STEP = {
-  numberWidth: 20,
-  border: 2,
-  padLeft: 6,
-  padY: 1.5,
-  marginBottom: 6,
-  keyWidth: 58,
-  keySize: 6.6,
-  rowGap: 2.5,
-  titleSize: 8.8,
-  idSize: 6.2,
-  badgeSize: 6.4,
-  badgePadX: 4,
-  mathSize: 8.6,
-  resultSize: 9,
-  resultLabel: 'Result   ',
-  sourceSize: 7.2,
-  sourceLine: 1.35,
-  noteSize: 7,
-  tight: 1.3,
+  numberWidth: 19,
+  /** Right-hand margin column: the step's value, its criterion and verdict. */
+  valueWidth: 84,
+  /** The narrow checker column at the far right (tick, initials, remark number; stamped by finishPdf). */
+  checkWidth: 24,
+  gap: 6,
+  padY: 2.2,
+  marginBottom: 2,
+  titleSize: 8.3,
+  mathSize: 8.3,
+  lineGap: 1.6,
+  valueSize: 8.4,
+  glyph: 6.4,
+  refSize: 6.3,
+  noteSize: 6.6,
+  criterionSize: 6.8,
+  tight: 1.28,
 } as const
 
 interface Face {
@@ -81,15 +79,17 @@ export function lineCount(words: { text: string; size: number; face: Face }[], w
   return lines
 }
 
-/** Space kept between the substituted values and a result beside them. */
-const RESULT_GAP = 12
-
 export interface StepLayout {
-  /** Font size of each formula: shrunk (to no less than 70 %) when it is wider than its column. */
-  formulaSize: number
-  substitutedSize: number
-  /** The result sits under the substituted values instead of beside them. */
-  resultBelow: boolean
+  /** Each formula as the lines it is set in, with its font size (shrunk to no less than 80 %, then split). */
+  formula: MathLine[]
+  substituted: MathLine[]
+  /** The small line under the working: reference, where inputs come from, the step id. */
+  refLine: string
+}
+
+export interface MathLine {
+  tex: string
+  size: number
 }
 
 function mathWidth(tex: string | undefined, size: number): number {
@@ -102,52 +102,79 @@ function mathHeight(tex: string | undefined, size: number): number {
   return (m.ascent + m.descent) * size
 }
 
-const fit = (tex: string | undefined, room: number) => {
-  const w = mathWidth(tex, STEP.mathSize)
-  return w > room ? Math.max(0.7, room / w) * STEP.mathSize : STEP.mathSize
+/** Splits TeX at its top-level separators (`;\quad`, `,\;`, …), keeping each separator on the part before. */
+function topLevelParts(tex: string): string[] {
+  const parts: string[] = []
+  let depth = 0
+  let start = 0
+  const sep = /^(;|,)\\(quad|;|\s)\s*/
+  for (let i = 0; i < tex.length; i++) {
+    const ch = tex[i]
+    if (ch === '{') depth++
+    else if (ch === '}') depth--
+    else if (depth === 0 && (ch === ';' || ch === ',')) {
+      const m = sep.exec(tex.slice(i))
+      if (m) {
+        parts.push(tex.slice(start, i + 1))
+        start = i + m[0].length
+        i = start - 1
+      }
+    }
+  }
+  parts.push(tex.slice(start))
+  return parts.map((p) => p.trim()).filter(Boolean)
 }
 
-function resultWidth(v: StepView): number {
-  return textWidth(STEP.resultLabel, STEP.keySize, { family: SANS }) + textWidth(v.result || '—', STEP.resultSize, { family: SANS, bold: true })
+/** A formula set in the column: one line when it fits (shrunk at most to 80 %), else split at its separators. */
+export function mathLines(tex: string | undefined, room: number): MathLine[] {
+  if (!tex) return []
+  const w = mathWidth(tex, STEP.mathSize)
+  if (w <= room) return [{ tex, size: STEP.mathSize }]
+  if (w * 0.8 <= room) return [{ tex, size: (room / w) * STEP.mathSize }]
+  const parts = topLevelParts(tex)
+  if (parts.length < 2) return [{ tex, size: Math.max(0.6, room / w) * STEP.mathSize }]
+  const lines: string[] = []
+  let cur = ''
+  for (const p of parts) {
+    const next = cur ? `${cur}\\; ${p}` : p
+    if (cur && mathWidth(next, STEP.mathSize) > room) {
+      lines.push(cur)
+      cur = p
+    } else cur = next
+  }
+  if (cur) lines.push(cur)
+  return lines.map((l) => {
+    const lw = mathWidth(l, STEP.mathSize)
+    return { tex: l, size: lw > room ? Math.max(0.6, room / lw) * STEP.mathSize : STEP.mathSize }
+  })
+}
+
+/** Width of the body column (between the number and the value column). */
+export function bodyWidth(paper: Paper): number {
+  return contentWidth(paper) - STEP.numberWidth - STEP.valueWidth - STEP.checkWidth - 2 * STEP.gap
+}
+
+export function refLineOf(v: StepView): string {
+  return [v.source ? `per ${v.source}` : '', v.from ? `from ${v.from}` : '', v.id].filter(Boolean).join('  ·  ')
 }
 
 /** Decisions PdfStepBox and stepHeight share, so the estimate sees the box that is drawn. */
 export function stepLayout(v: StepView, paper: Paper): StepLayout {
-  const column = contentWidth(paper) - STEP.border - STEP.padLeft - STEP.numberWidth - STEP.keyWidth
-  const substitutedSize = fit(v.substituted, column)
-  return {
-    formulaSize: fit(v.formula, column),
-    substitutedSize,
-    // A result that would have to wrap beside the values reads better whole on the next row.
-    resultBelow: mathWidth(v.substituted, substitutedSize) + RESULT_GAP + resultWidth(v) > column,
-  }
+  const room = bodyWidth(paper)
+  return { formula: mathLines(v.formula, room), substituted: mathLines(v.substituted, room), refLine: refLineOf(v) }
 }
 
 export function stepHeight(v: StepView, paper: Paper): number {
-  const inner = contentWidth(paper) - STEP.border - STEP.padLeft - STEP.numberWidth
+  const room = bodyWidth(paper)
   const layout = stepLayout(v, paper)
-  // The key labels set no line height, so they inherit the page's, already resolved to points at body size.
-  const key = BODY_SIZE * LINE
-  const badge = v.verdictLabel ? textWidth(v.verdictLabel, STEP.badgeSize, { family: SANS, bold: true }) + 2 * STEP.badgePadX : 0
-  const titleLines = lineCount(
-    [{ text: v.title, size: STEP.titleSize, face: { family: SANS, bold: true } }, { text: `   ${v.id}`, size: STEP.idSize, face: { family: MONO } }],
-    inner - badge,
-  )
-  let h = Math.max(titleLines * STEP.titleSize * STEP.tight, v.verdictLabel ? STEP.badgeSize * STEP.tight + 1 : 0)
-  if (v.formula) h += STEP.rowGap + Math.max(key, mathHeight(v.formula, layout.formulaSize))
-  const result = [{ text: STEP.resultLabel, size: STEP.keySize, face: { family: SANS } }, { text: v.result || '—', size: STEP.resultSize, face: { family: SANS, bold: true } }]
-  const subHeight = mathHeight(v.substituted, layout.substitutedSize)
-  if (layout.resultBelow) {
-    h += STEP.rowGap + Math.max(key, subHeight)
-    h += STEP.rowGap + lineCount(result, inner - STEP.keyWidth) * STEP.resultSize * STEP.tight
-  } else {
-    const room = inner - STEP.keyWidth - mathWidth(v.substituted, layout.substitutedSize)
-    h += STEP.rowGap + Math.max(key, subHeight, lineCount(result, room) * STEP.resultSize * STEP.tight)
-  }
-  const sourceLines = lineCount([{ text: v.source ?? '—', size: STEP.sourceSize, face: { family: SANS } }], inner - STEP.keyWidth)
-  h += STEP.rowGap + Math.max(key, sourceLines * STEP.sourceSize * STEP.sourceLine)
-  if (v.note) h += lineCount([{ text: v.note, size: STEP.noteSize, face: { family: SANS, italic: true } }], inner) * STEP.noteSize * STEP.tight
-  return h + 2 * STEP.padY + STEP.marginBottom
+  let h = lineCount([{ text: v.title, size: STEP.titleSize, face: { family: SANS, bold: true } }], room) * STEP.titleSize * STEP.tight
+  for (const l of [...layout.formula, ...layout.substituted]) h += STEP.lineGap + mathHeight(l.tex, l.size)
+  h += STEP.lineGap + lineCount([{ text: layout.refLine, size: STEP.refSize, face: { family: SANS } }], room) * STEP.refSize * STEP.tight
+  if (v.note) h += lineCount([{ text: v.note, size: STEP.noteSize, face: { family: SANS, italic: true } }], room) * STEP.noteSize * STEP.tight
+  let side = lineCount([{ text: v.result || '—', size: STEP.valueSize, face: { family: SANS, bold: true } }], STEP.valueWidth - (v.utilisation !== undefined ? STEP.glyph + 3 : 0)) * STEP.valueSize * STEP.tight
+  if (v.criterion) side += STEP.lineGap + mathHeight(v.criterion, STEP.criterionSize)
+  if (v.verdictLabel) side += STEP.refSize * STEP.tight + 1
+  return Math.max(h, side) + 2 * STEP.padY + STEP.marginBottom + 0.4
 }
 
 /** Height a page offers to flowing content, kept a little short of the real thing. */

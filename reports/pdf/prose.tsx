@@ -65,9 +65,14 @@ function tokenize(children: ReactNode, style: Style[], out: Token[], pending: { 
   })
 }
 
+/** Source line breaks inside a paragraph are spaces: react-pdf would keep them as breaks. */
+function unwrap(children: ReactNode): ReactNode {
+  return Children.map(children, (c) => (typeof c === 'string' ? c.replace(/[ \t]*\n[ \t]*/g, ' ') : c))
+}
+
 /** Paragraph-like content: plain Text when possible, a word row when math is present. */
 export function Inline({ children, style }: Props & { style?: Style }) {
-  if (!hasMath(children)) return <Text style={style}>{children}</Text>
+  if (!hasMath(children)) return <Text style={style}>{unwrap(children)}</Text>
   const tokens: Token[] = []
   tokenize(children, [], tokens, { space: false })
   const gap = BODY_SIZE * 0.27

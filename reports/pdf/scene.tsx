@@ -1,13 +1,16 @@
 /** Draws a Scene with react-pdf's Svg primitives. */
 import { Circle, Line, Path, Rect, Svg, Text } from '@react-pdf/renderer'
 import type { Scene } from '../model/scene'
-import { TEXT_STACK } from './fonts'
+import { MONO, SANS } from './fonts'
+
+/** SVG text takes one family: Noto Sans, or its Mono where the Sans lacks a glyph (−, ≤, ≥, √). */
+const familyOf = (text: string): string => (/[\u2212\u2264\u2265\u221a]/.test(text) ? MONO : SANS)
 
 type TextProps = React.ComponentProps<typeof Text>
 
 /** react-pdf's types omit the SVG text attributes its layout reads. */
-function svgTextProps(x: number, y: number, textAnchor: string, fill: string, fontSize: number, fontWeight: number): TextProps {
-  return { x, y, textAnchor, fill, fontFamily: TEXT_STACK, fontSize, fontWeight } as unknown as TextProps
+function svgTextProps(x: number, y: number, textAnchor: string, fill: string, fontSize: number, fontWeight: number, family: string): TextProps {
+  return { x, y, textAnchor, fill, fontFamily: family, fontSize, fontWeight } as unknown as TextProps
 }
 
 export function SceneSvg({ scene }: { scene: Scene }) {
@@ -26,7 +29,7 @@ export function SceneSvg({ scene }: { scene: Scene }) {
           case 'text':
             return (
               // SVG text takes font settings as presentation props; a style object is ignored and falls back to Helvetica.
-              <Text key={i} {...svgTextProps(it.x, it.y, it.anchor ?? 'start', it.fill ?? '#000', it.size, it.bold ? 700 : 400)}>
+              <Text key={i} {...svgTextProps(it.x, it.y, it.anchor ?? 'start', it.fill ?? '#000', it.size, it.bold ? 700 : 400, familyOf(it.text))}>
                 {it.text}
               </Text>
             )

@@ -3,9 +3,10 @@ import { stepAnchor } from '../model/context'
 import { useReport } from '../model/react-context'
 import { diagramFigure, plotFigure, utilisationFigure, type FigureView } from '../model/figures'
 import {
-  cautions, checksTable, historyTable, inputsTable, references, remarksTable, signatories, stepView, tableView, titleView, verdictView,
+  cautions, componentTable, criteriaTable, detailingTable, governingTables, historyTable, inputsTable, materialsTable, references, remarksTable, signatories, stepView, tableView, titleView, verdictView,
   type StepView, type TableView,
 } from '../model/views'
+import { formatUtilisation } from '../model/format'
 import { Tex } from './math'
 import { SceneSvg } from './scene'
 
@@ -19,7 +20,7 @@ export function HtmlTable({ view, caption = true }: { view: TableView; caption?:
         </thead>
         <tbody>
           {view.rows.map((row, r) => (
-            <tr key={r}>{row.map((v, i) => <td key={i} className={view.numeric[i] ? 'num' : undefined}>{v}</td>)}</tr>
+            <tr key={r}>{row.map((v, i) => <td key={i} className={[view.numeric[i] ? 'num' : '', v === 'fails' || v === 'not met' ? 'inv-flag' : ''].join(' ').trim() || undefined}>{v}</td>)}</tr>
           ))}
         </tbody>
       </table>
@@ -27,36 +28,69 @@ export function HtmlTable({ view, caption = true }: { view: TableView; caption?:
   )
 }
 
+/** The utilisation glyph: a small square filled from below in proportion to u; open-topped and in the accent colour above 1. */
+export function UGlyph({ u }: { u: number }) {
+  const k = Math.max(0, Math.min(1, u))
+  const over = u > 1 + 1e-9
+  return (
+    <svg className={over ? 'inv-u inv-u-over' : 'inv-u'} viewBox="0 0 8 8" width="8" height="8" aria-hidden="true">
+      <path d={`M0.5 0.5V7.5H7.5V0.5${over ? '' : 'Z'}`} fill="none" strokeWidth="0.8" />
+      {k > 0 ? <rect x="1.2" y={6.8 - 5.6 * k} width="5.6" height={5.6 * k} /> : null}
+    </svg>
+  )
+}
+
 export function StepBox({ v }: { v: StepView }) {
   return (
     <div className={`inv-step inv-${v.verdict ?? 'info'}`} id={stepAnchor(v.id)}>
-      <div className="inv-step-head">
-        <a className="inv-step-n" href={`#${stepAnchor(v.id)}`}>{v.n}</a>
-        <span className="inv-step-title">{v.title}</span>
-        <code className="inv-step-id">{v.id}</code>
-        {v.verdictLabel ? <span className="inv-badge">{v.verdictLabel}</span> : null}
+      <a className="inv-step-n" href={`#${stepAnchor(v.id)}`}>{v.n}</a>
+      <div className="inv-step-work">
+        <div className="inv-step-title">{v.title}</div>
+        {v.formula ? <div className="inv-line"><Tex tex={v.formula} /></div> : null}
+        {v.substituted ? <div className="inv-line"><Tex tex={v.substituted} /></div> : null}
+        <div className="inv-ref">
+          {v.source ? <span>per {v.source}</span> : null}
+          {v.from ? <span>from {v.from}</span> : null}
+          <code className="inv-step-id">{v.id}</code>
+        </div>
+        {v.note ? <p className="inv-note">{v.note}</p> : null}
       </div>
-      <dl className="inv-step-body">
-        {v.formula ? <><dt>Formula</dt><dd><Tex tex={v.formula} /></dd></> : null}
-        {v.substituted ? <><dt>With values</dt><dd><Tex tex={v.substituted} /></dd></> : null}
-        <dt>Result</dt><dd className="inv-result">{v.result || '—'}</dd>
-        <dt>Source</dt><dd>{v.source ?? '—'}</dd>
-      </dl>
-      {v.note ? <p className="inv-note">{v.note}</p> : null}
+      <div className="inv-value">
+        <span className="inv-result">{v.utilisation !== undefined ? <UGlyph u={v.utilisation} /> : null}{v.result || '—'}</span>
+        {v.criterion ? <span className="inv-criterion"><Tex tex={v.criterion} /></span> : null}
+        {v.verdictLabel ? <span className="inv-verdict-word">{v.verdictLabel}</span> : null}
+      </div>
+      <div className="inv-check" aria-label="checker" />
     </div>
   )
 }
 
 export function Steps({ section }: { section: string }) {
-  const list = useReport().bySection.get(section) ?? []
-  return <div className="inv-steps">{list.map(({ n, step }) => <StepBox key={step.id} v={stepView(n, step)} />)}</div>
+  const ctx = useReport()
+  const list = ctx.bySection.get(section) ?? []
+  return <div className="inv-steps">{list.map(({ n, step }) => <StepBox key={step.id} v={stepView(n, step, ctx.numberOf)} />)}</div>
+}
+
+export function AppendixSteps() {
+  const ctx = useReport()
+  return (
+    <>
+      {[...ctx.appendixBySection].map(([section, list]) => (
+        <div key={section}>
+          <h3>{section}</h3>
+          <div className="inv-steps">{list.map(({ n, step }) => <StepBox key={step.id} v={stepView(n, step, ctx.numberOf)} />)}</div>
+        </div>
+      ))}
+      {(ctx.pkg.result.tables ?? []).filter((t) => t.id.startsWith('tab.sweep')).map((t) => <HtmlTable key={t.id} view={tableView(t)} />)}
+    </>
+  )
 }
 
 export function Step({ id }: { id: string }) {
   const ctx = useReport()
   const n = ctx.numberOf.get(id)
   const step = ctx.pkg.result.steps.find((s) => s.id === id)
-  return n && step ? <StepBox v={stepView(n, step)} /> : null
+  return n && step ? <StepBox v={stepView(n, step, ctx.numberOf)} /> : null
 }
 
 export function OtherSteps() {
@@ -83,21 +117,40 @@ export function TitleBlock() {
   const t = titleView(ctx.pkg, ctx.resultHash)
   return (
     <div className="inv-titleblock">
-      <div className="inv-titleblock-head"><small>Calculation package</small><div>{t.title}</div></div>
+      <div className="inv-titleblock-head">{t.title}</div>
       <dl>{t.rows.map(([k, v]) => <div key={k}><dt>{k}</dt><dd>{v}</dd></div>)}</dl>
     </div>
   )
 }
 
 export function Verdict() {
-  const v = verdictView(useReport().pkg)
+  const ctx = useReport()
+  const v = verdictView(ctx.pkg, ctx)
   if (!v) return null
   return (
     <div className={`inv-verdict ${v.pass ? 'inv-pass' : 'inv-fail'}`}>
-      <span className="inv-verdict-mark">{v.pass ? 'PASS' : 'FAIL'}</span>
-      <div><strong>{v.headline}</strong><br />{v.detail}</div>
+      <strong>{v.pass ? 'Holds.' : 'Does not hold.'} {v.headline}</strong>
+      {v.governing ? <div>{v.governing}{v.utilisation !== null ? <> <UGlyph u={v.utilisation} /> <b>u = {formatUtilisation(v.utilisation)}</b></> : null}</div> : null}
+      {v.unmet.length ? <div className="inv-unmet">Not met: {v.unmet.join('; ')}.</div> : null}
     </div>
   )
+}
+
+export function Criteria() {
+  const view = criteriaTable(useReport())
+  return view ? <HtmlTable view={view} /> : null
+}
+
+const Lines = ({ items }: { items: string[] }) => <ul className="inv-lines">{items.map((t, i) => <li key={i}>{t}</li>)}</ul>
+
+export function DesignBasis() {
+  const b = useReport().pkg.result.basis
+  return b ? <Lines items={b.statements} /> : null
+}
+
+export function Assumptions() {
+  const b = useReport().pkg.result.basis
+  return b ? <Lines items={b.assumptions} /> : null
 }
 
 export const InputsTable = () => {
@@ -105,15 +158,26 @@ export const InputsTable = () => {
   return pkg.inputRows.length ? <HtmlTable view={inputsTable(pkg)} caption={false} /> : null
 }
 
+export function MaterialsTable() {
+  const view = materialsTable(useReport().pkg)
+  return view ? <HtmlTable view={view} /> : null
+}
+
+export function GoverningTables() {
+  return <>{governingTables(useReport()).map((t) => <HtmlTable key={t.id} view={t} />)}</>
+}
+
 export function ResultsTable({ section, id }: { section?: string; id?: string }) {
-  const tables = (useReport().pkg.result.tables ?? []).filter((t) => (id ? t.id === id : !section || t.section === section))
+  const tables = (useReport().pkg.result.tables ?? []).filter((t) => t.id !== 'checks-summary' && (id ? t.id === id : !section || t.section === section))
   return <>{tables.map((t) => <HtmlTable key={t.id} view={tableView(t)} />)}</>
 }
 
 export function ChecksTable() {
   const ctx = useReport()
   const checks = ctx.pkg.result.checks ?? []
-  return checks.length ? <HtmlTable view={checksTable(checks, ctx)} /> : null
+  if (!checks.length) return null
+  const d = detailingTable(checks, ctx)
+  return <><HtmlTable view={componentTable(checks, ctx)} />{d ? <HtmlTable view={d} /> : null}</>
 }
 
 export function References() {

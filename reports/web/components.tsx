@@ -1,14 +1,14 @@
 /** The web implementation of the template vocabulary. */
 import type { ReactNode } from 'react'
 import type { ReportComponentProps, ReportComponents } from '../components'
-import { backMatterSections } from '../model/back-matter'
+import { attachmentLetter, backMatterSections } from '../model/back-matter'
 import { sectionAnchor } from '../model/context'
 import { watermarkFor, STATE_LABEL } from '../model/format'
 import { useReport } from '../model/react-context'
 import * as B from './blocks'
 import { Tex } from './math'
 
-function SectionShell({ id, n, title, continues, children }: { id: string; n: number; title: string; continues: boolean; children?: ReactNode }) {
+function SectionShell({ id, n, title, continues, children }: { id: string; n: number | string; title: string; continues: boolean; children?: ReactNode }) {
   return (
     <section id={sectionAnchor(id)} className={continues ? 'inv-section inv-continue' : 'inv-section'}>
       <h2><span className="inv-section-n">{n}</span> {title}</h2>
@@ -24,7 +24,7 @@ function Section({ id, title, ordinal, page, children }: ReportComponentProps['S
 
 function Appendices() {
   const { pkg } = useReport()
-  return <ol className="inv-appendices" type="A">{pkg.attachments.map((a, i) => <li key={i}>{a.name}</li>)}</ol>
+  return <ul className="inv-appendices">{pkg.attachments.map((a, i) => <li key={i}>Appendix {attachmentLetter(pkg, i)}: {a.name}</li>)}</ul>
 }
 
 const BACK_BODY: Record<string, () => ReactNode> = {
@@ -34,6 +34,7 @@ const BACK_BODY: Record<string, () => ReactNode> = {
   revisions: () => <><B.RevisionHistory /><B.RemarksLog /></>,
   signatures: () => <B.SignatureBlock />,
   appendices: () => <Appendices />,
+  working: () => <B.AppendixSteps />,
 }
 
 function BackMatter() {
@@ -82,6 +83,11 @@ export const webReportComponents: ReportComponents = {
   OtherSteps: B.OtherSteps,
   ResultsTable: B.ResultsTable,
   ChecksTable: B.ChecksTable,
+  Criteria: B.Criteria,
+  DesignBasis: B.DesignBasis,
+  Assumptions: B.Assumptions,
+  MaterialsTable: B.MaterialsTable,
+  GoverningTables: B.GoverningTables,
   Figure: B.Figure,
   Plot: B.Plot,
   UtilisationChart: B.UtilisationChart,
