@@ -7,6 +7,7 @@ import type { CalcResult } from '@/lib/calc/run'
 import type { MechanismId as CalcType } from '@/lib/mechanisms'
 import type { UnitSystem } from '@/lib/units'
 import { saveWorkingInputsAction } from './bench-actions'
+import { CrankProvider } from './crank-context'
 import { InputsForm, type FormBinding } from './inputs-form'
 import { KeyResults, type RevisionSummary } from './key-results'
 import { MechanismDrawing } from './mechanism-drawing'
@@ -71,7 +72,6 @@ export function Bench(props: BenchProps) {
   const [saving, setSaving] = useState(false)
   const [alert, setAlert] = useState<string | null>(null)
   const [restorable, setRestorable] = useState<{ inputs: Tree; at: number } | null>(null)
-  const [crankDeg, setCrankDeg] = useState(0)
 
   const payload = useMemo(() => complete(inputs), [inputs])
   const deferred = useDeferredValue(payload)
@@ -180,6 +180,8 @@ export function Bench(props: BenchProps) {
     setInputs((v) => setPath(v, 'displayUnits', next === 'US' ? 'US' : undefined))
   }
 
+  const geometry = useMemo(() => (getPath(payload, 'geometry') as Record<string, number>) ?? {}, [payload])
+  const marginDeg = Number(getPath(payload, 'toggleMarginDeg') ?? 5)
   const loads = (inputs.loads as { name: string; fx: number; fy: number }[] | undefined) ?? []
   const errorOf = (path: string) => parseErrors[path] ?? (!outcome.ok ? outcome.fieldErrors[path] : undefined) ?? serverErrors[path]
   const binding: FormBinding = {
@@ -278,6 +280,7 @@ export function Bench(props: BenchProps) {
   )
 
   return (
+    <CrankProvider>
     <div className="flex flex-col gap-4">
       <KeyResults result={outcome.ok ? outcome.result : null} infeasible={!outcome.ok && outcome.result ? outcome.result.feasibility.message : null} hasErrors={!outcome.ok || hasParseErrors} dirty={dirty} savedAt={savedAt} system={system} revision={props.revision} requiredStroke={getPath(payload, 'requiredStroke') as number | undefined} />
       <div className="grid items-start gap-4 lg:grid-cols-[minmax(22rem,26rem)_1fr]">
@@ -294,11 +297,12 @@ export function Bench(props: BenchProps) {
           )}
         </div>
         <div className="flex min-w-0 flex-col gap-4">
-          <MechanismDrawing mechanism={calcType} geometry={(getPath(payload, 'geometry') as Record<string, number>) ?? {}} result={result} loads={loads} marginDeg={Number(getPath(payload, 'toggleMarginDeg') ?? 5)} crankDeg={crankDeg} onCrank={setCrankDeg} />
-          {result && result.feasibility.ok && <Plots result={result} crankDeg={crankDeg} onCrank={setCrankDeg} />}
+          <MechanismDrawing mechanism={calcType} geometry={geometry} result={result} loads={loads} marginDeg={marginDeg} />
+          {result && result.feasibility.ok && <Plots result={result} />}
         </div>
       </div>
-      {result && result.feasibility.ok && <PositionsTable result={result} crankDeg={crankDeg} onCrank={setCrankDeg} />}
+      {result && result.feasibility.ok && <PositionsTable result={result} />}
     </div>
+    </CrankProvider>
   )
 }

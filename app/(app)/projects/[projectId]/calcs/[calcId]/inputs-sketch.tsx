@@ -1,6 +1,6 @@
 'use client'
 
-import { useMemo } from 'react'
+import { memo, useMemo } from 'react'
 import { getMechanism } from '@/lib/mechanisms'
 import { frameOf, jointsAt } from './mechanism-geometry'
 import { MechanismSvg } from './mechanism-svg'
@@ -25,7 +25,7 @@ const MEANING: Record<string, [term: string, meaning: string][]> = {
 }
 
 /** A labelled sketch explaining every geometry input, drawn by the same code as the live drawing. */
-export function InputsSketch({ mechanism }: { mechanism: string }) {
+export const InputsSketch = memo(function InputsSketch({ mechanism }: { mechanism: string }) {
   const frame = useMemo(() => {
     const def = getMechanism(mechanism)
     return frameOf(mechanism, def.defaultGeometry as Record<string, number>, 5)
@@ -48,4 +48,4 @@ export function InputsSketch({ mechanism }: { mechanism: string }) {
       </div>
     </details>
   )
-}
+})

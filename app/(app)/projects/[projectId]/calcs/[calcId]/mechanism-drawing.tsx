@@ -3,6 +3,7 @@
 import { memo, useEffect, useMemo, useRef, useState } from 'react'
 import type { CalcResult } from '@/lib/calc/run'
 import { forcesAt, frameOf, jointsAt } from './mechanism-geometry'
+import { useCrank } from './crank-context'
 import { InputsSketch } from './inputs-sketch'
 import { MechanismSvg } from './mechanism-svg'
 
@@ -12,8 +13,6 @@ interface MechanismDrawingProps {
   result: CalcResult | null
   loads: { fx: number; fy: number }[]
   marginDeg: number
-  crankDeg: number
-  onCrank(deg: number): void
 }
 
 /**
@@ -21,7 +20,8 @@ interface MechanismDrawingProps {
  * runs it over the working range. While playing, the angle lives here (the plots and the table
  * follow a few times a second), so only the drawing is redrawn each frame.
  */
-export const MechanismDrawing = memo(function MechanismDrawing({ mechanism, geometry, result, loads, marginDeg, crankDeg, onCrank }: MechanismDrawingProps) {
+export const MechanismDrawing = memo(function MechanismDrawing({ mechanism, geometry, result, loads, marginDeg }: MechanismDrawingProps) {
+  const { crankDeg, setCrankDeg: onCrank } = useCrank()
   const frame = useMemo(() => frameOf(mechanism, geometry, marginDeg), [mechanism, geometry, marginDeg])
   const [angle, setAngle] = useState(crankDeg)
   const [playing, setPlaying] = useState(false)
@@ -53,7 +53,7 @@ export const MechanismDrawing = memo(function MechanismDrawing({ mechanism, geom
         frames = 0
         since = now
       }
-      if (now - pushed.current > 120) {
+      if (now - pushed.current > 250) {
         pushed.current = now
         onCrank(a)
       }

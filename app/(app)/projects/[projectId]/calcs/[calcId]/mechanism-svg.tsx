@@ -1,4 +1,5 @@
 /** The mechanism as SVG: one picture for the live drawing and for the sketch of the inputs. */
+import { useId } from 'react'
 import type { Point } from '@/lib/contract'
 import { jointsAt, type MechanismFrame } from './mechanism-geometry'
 
@@ -46,6 +47,7 @@ interface DrawProps {
 
 /** One picture of the mechanism: links, pivots, the tracer's path, locked positions, dimensions and force arrows. */
 export function MechanismSvg({ mechanism, frame, joints, forces, load, showValues }: DrawProps) {
+  const titleId = useId()
   const { x0, y0, x1, y1 } = frame.box
   const span = Math.max(x1 - x0, y1 - y0)
   const fs = span * 0.032
@@ -56,8 +58,8 @@ export function MechanismSvg({ mechanism, frame, joints, forces, load, showValue
   const fMax = forces ? Math.max(1e-9, ...Object.values(forces.pins).map((f) => Math.hypot(f.x, f.y)), load ? Math.hypot(load.x, load.y) : 0) : 1
   const arrowLen = (f: Point) => (Math.hypot(f.x, f.y) / fMax) * span * 0.16
   return (
-    <svg viewBox={`${x0} ${-y1} ${x1 - x0} ${y1 - y0}`} className="h-auto max-h-[26rem] w-full" role="img" aria-labelledby="drawing-title" data-testid="mechanism-svg">
-      <title id="drawing-title">Mechanism drawing</title>
+    <svg viewBox={`${x0} ${-y1} ${x1 - x0} ${y1 - y0}`} className="h-auto max-h-[26rem] w-full" role="img" aria-labelledby={titleId} data-testid={showValues ? 'mechanism-svg' : 'sketch-svg'}>
+      <title id={titleId}>{showValues ? 'Mechanism drawing' : 'Sketch: what the inputs mean'}</title>
       {/* The crank circle and the ring P must stay in (|OP| from ρmin to ρmax). */}
       <circle cx={frame.e} cy={0} r={frame.r} fill="none" stroke={MUTED} strokeWidth={sw * 0.5} strokeDasharray={`${sw * 3} ${sw * 2}`} />
       {!frame.feasible && frame.cell.rhoMax > 0 && (
@@ -101,7 +103,8 @@ export function MechanismSvg({ mechanism, frame, joints, forces, load, showValue
             const a = joints[l.points[0]]
             const b = joints[l.points[l.points.length - 1]]
             const m = { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 }
-            const d = dims[l.name]
+            // Each dimension is labelled once, on the first link that has it.
+            const d = frame.links.find((x) => dims[x.name] === dims[l.name])?.name === l.name ? dims[l.name] : undefined
             return (
               <g key={l.name}>
                 <line x1={a.x} y1={-a.y} x2={b.x} y2={-b.y} stroke={l.kind === 'crank' ? ACCENT : INK} strokeWidth={sw * (l.kind === 'crank' ? 1.8 : 1.3)} strokeLinecap="round" />
@@ -128,7 +131,7 @@ export function MechanismSvg({ mechanism, frame, joints, forces, load, showValue
           {Object.entries(joints).map(([name, p]) => (
             <g key={name}>
               <circle cx={p.x} cy={-p.y} r={sw * (name === 'O' || name === 'C' ? 2.4 : 1.6)} fill={name === 'O' || name === 'C' ? INK : '#fff'} stroke={INK} strokeWidth={sw * 0.6} />
-              <text x={p.x + fs * 0.45} y={-p.y - fs * 0.45} fontSize={fs} fontWeight={700} fill={name === 'T' ? ACCENT : INK} data-testid={name === 'T' ? 'tracer' : undefined} data-x={name === 'T' ? p.x.toFixed(4) : undefined} data-y={name === 'T' ? p.y.toFixed(4) : undefined}>
+              <text x={p.x + fs * 0.45} y={-p.y - fs * 0.45} fontSize={fs} fontWeight={700} fill={name === 'T' ? ACCENT : INK} data-testid={name === 'T' && showValues ? 'tracer' : undefined} data-x={name === 'T' ? p.x.toFixed(4) : undefined} data-y={name === 'T' ? p.y.toFixed(4) : undefined}>
                 {name}
               </text>
             </g>

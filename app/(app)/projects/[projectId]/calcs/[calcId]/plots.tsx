@@ -5,6 +5,7 @@ import type { CalcResult } from '@/lib/calc/run'
 import { plotScene, PLOT_TITLE, type PlotKind } from '@/reports/model/plots'
 import type { Scene } from '@/reports/model/scene'
 import { utilisationScene } from '@/reports/model/utilisation'
+import { useCrank } from './crank-context'
 
 /*
  * The package's own plots (reports/model/plots.ts and utilisation.ts draw the same scenes into the
@@ -65,7 +66,8 @@ function SceneView({ scene, label, cursor, onPick, testId }: { scene: Scene; lab
 
 const WIDTH = 520
 
-export const Plots = memo(function Plots({ result, crankDeg, onCrank }: { result: CalcResult; crankDeg: number; onCrank(deg: number): void }) {
+export const Plots = memo(function Plots({ result }: { result: CalcResult }) {
+  const { crankDeg, setCrankDeg: onCrank } = useCrank()
   const [kind, setKind] = useState<PlotKind>('links')
   const [axis, setAxis] = useState<Axis>('crank')
   const source = useMemo(() => (axis === 'travel' ? byTravel(result) : result), [axis, result])

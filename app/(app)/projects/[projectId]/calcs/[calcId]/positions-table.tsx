@@ -4,6 +4,7 @@ import { memo, useMemo, useState } from 'react'
 import { createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table'
 import type { CalcResult } from '@/lib/calc/run'
 import type { PositionResult } from '@/lib/contract'
+import { useCrank } from './crank-context'
 
 interface Row {
   crankDeg: number
@@ -17,7 +18,7 @@ interface Row {
   governs: string[]
 }
 
-const n = (x: number | null | undefined, d = 1) => (x === null || x === undefined || !Number.isFinite(x) ? '' : x.toFixed(d))
+const n = (x: number | null | undefined, d = 1) => (x === null || x === undefined || !Number.isFinite(x) ? '' : Number(x.toFixed(d)) === 0 ? (0).toFixed(d) : x.toFixed(d))
 
 /** Per position: the extremes of the envelope and the check demands that occur there. */
 function governingAt(result: CalcResult, loadCase: string): Map<number, string[]> {
@@ -64,7 +65,8 @@ function csvOf(headers: string[], rows: (string | number)[][]): string {
 }
 
 /** The solved positions: sortable, filterable, exported as CSV; rows where a maximum occurs are marked. */
-export const PositionsTable = memo(function PositionsTable({ result, crankDeg, onCrank }: { result: CalcResult; crankDeg: number; onCrank(deg: number): void }) {
+export const PositionsTable = memo(function PositionsTable({ result }: { result: CalcResult }) {
+  const { crankDeg, setCrankDeg: onCrank } = useCrank()
   const [loadCase, setLoadCase] = useState(result.loadCases[0]?.name ?? '')
   const [sorting, setSorting] = useState<SortingState>([])
   const [filter, setFilter] = useState('')
