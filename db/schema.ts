@@ -156,6 +156,8 @@ export const revisionEvents = sqliteTable(
     userId: text('user_id')
       .notNull()
       .references(() => users.id),
+    /** The person's name as it was when they acted: the record prints it, whatever they are called later. */
+    actorName: text('actor_name'),
     reason: text('reason'),
     statement: text('statement'),
     signature: text('signature'),
@@ -177,6 +179,8 @@ export const checkRemarks = sqliteTable('check_remarks', {
   authorId: text('author_id')
     .notNull()
     .references(() => users.id),
+  /** The author's name as it was when the remark was written. */
+  authorName: text('author_name'),
   text: text('text').notNull(),
   status: text('status', { enum: ['open', 'answered', 'closed'] }).notNull().default('open'),
   response: text('response'),
@@ -196,6 +200,8 @@ export const remarkReplies = sqliteTable(
     authorId: text('author_id')
       .notNull()
       .references(() => users.id),
+    /** The author's name as it was when the reply was written. */
+    authorName: text('author_name'),
     text: text('text').notNull(),
     createdAt: createdAt(),
   },
@@ -213,6 +219,8 @@ export const stepTicks = sqliteTable(
     userId: text('user_id')
       .notNull()
       .references(() => users.id),
+    /** The checker's name as it was when they ticked. */
+    userName: text('user_name'),
     at: integer('at', { mode: 'timestamp_ms' }).notNull(),
   },
   (t) => [primaryKey({ columns: [t.revisionId, t.stepId] })],
@@ -230,6 +238,8 @@ export const materialConfirmations = sqliteTable(
     userId: text('user_id')
       .notNull()
       .references(() => users.id),
+    /** The approver's name as it was when they confirmed. */
+    userName: text('user_name'),
     at: integer('at', { mode: 'timestamp_ms' }).notNull(),
   },
   (t) => [primaryKey({ columns: [t.revisionId, t.value] })],

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto'
-import { and, asc, eq, inArray, ne } from 'drizzle-orm'
+import { and, asc, eq, inArray, ne, sql } from 'drizzle-orm'
 import { db } from '@/db'
 import { audit } from '@/db/audit'
 import { checkRemarks, remarkReplies, revisions, users, type Revision } from '@/db/schema'
@@ -46,7 +46,7 @@ export async function remarksWithThreads(revisionId: string) {
       severity: checkRemarks.severity,
       text: checkRemarks.text,
       status: checkRemarks.status,
-      author: users.name,
+      author: sql<string>`coalesce(${checkRemarks.authorName}, ${users.name})`,
       authorId: checkRemarks.authorId,
       carriedFromId: checkRemarks.carriedFromId,
       closedAt: checkRemarks.closedAt,
@@ -58,7 +58,7 @@ export async function remarksWithThreads(revisionId: string) {
     .orderBy(asc(checkRemarks.createdAt))
   const replies = rows.length
     ? await db
-        .select({ id: remarkReplies.id, remarkId: remarkReplies.remarkId, text: remarkReplies.text, author: users.name, createdAt: remarkReplies.createdAt })
+        .select({ id: remarkReplies.id, remarkId: remarkReplies.remarkId, text: remarkReplies.text, author: sql<string>`coalesce(${remarkReplies.authorName}, ${users.name})`, createdAt: remarkReplies.createdAt })
         .from(remarkReplies)
         .innerJoin(users, eq(users.id, remarkReplies.authorId))
         .where(inArray(remarkReplies.remarkId, rows.map((r) => r.id)))
@@ -100,7 +100,7 @@ export async function addRemark(
   const stepId = input.stepId || null
   if (stepId && !anchorsOf(rev).has(stepId)) throw new AppError('invalid', 'Unknown step.', { stepId: `Revision ${rev.label} has no step, table or figure ${stepId}.` })
   const id = randomUUID()
-  await db.insert(checkRemarks).values({ id, revisionId: rev.id, stepId, severity: input.severity ?? 'must-resolve', authorId: who.id, text: input.text })
+  await db.insert(checkRemarks).values({ id, revisionId: rev.id, stepId, severity: input.severity ?? 'must-resolve', authorId: who.id, authorName: who.name, text: input.text })
   await audit({ userId: who.id, action: 'remark.added', projectId, calcId: calc.id, detail: { revisionId: rev.id, stepId, remarkId: id } })
   await notify({ to: 'engineer', kind: 'remark', revision: rev, calc, by: who, text: `${who.name} wrote a remark on ${calc.number} rev ${rev.label}${stepId ? ` at ${stepId}` : ''}: answer it` })
   return id
@@ -114,7 +114,7 @@ export async function replyToRemark(caller: Caller | null, projectId: string, ca
   if (remark.status === 'closed') throw new AppError('conflict', 'This remark is closed.')
   const id = randomUUID()
   await db.transaction(async (tx) => {
-    await tx.insert(remarkReplies).values({ id, remarkId, authorId: who.id, text })
+    await tx.insert(remarkReplies).values({ id, remarkId, authorId: who.id, authorName: who.name, text })
     if (actor.role === 'engineer') await tx.update(checkRemarks).set({ status: 'answered' }).where(eq(checkRemarks.id, remarkId))
   })
   await audit({ userId: who.id, action: 'remark.replied', projectId, calcId: calc.id, detail: { remarkId, replyId: id } })
@@ -161,6 +161,7 @@ export async function carryOverRemarks(tx: Tx, fromRevisionIds: string[], to: Re
       severity: r.severity,
       carriedFromId: r.id,
       authorId: r.authorId,
+      authorName: r.authorName,
       text: kept ? r.text : `[was at ${r.stepId}] ${r.text}`,
       status: r.status,
       createdAt: r.createdAt,

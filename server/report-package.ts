@@ -1,4 +1,4 @@
-import { asc, eq, inArray } from 'drizzle-orm'
+import { asc, eq, inArray, sql } from 'drizzle-orm'
 import { db } from '@/db'
 import { calcs, materialConfirmations, projects, revisionEvents, revisions, users, type Calc, type Project, type Revision } from '@/db/schema'
 import { inputRowsOf } from '@/lib/calc/input-rows'
@@ -65,14 +65,14 @@ export interface PendingEvent {
 async function signOffOf(rev: Revision, stepNumber: (id: string) => number | null, pending?: PendingEvent): Promise<SignOff> {
   const [events, ticks, confirmations] = await Promise.all([
     db
-      .select({ action: revisionEvents.action, by: users.name, at: revisionEvents.at, reason: revisionEvents.reason, signature: revisionEvents.signature })
+      .select({ action: revisionEvents.action, by: sql<string>`coalesce(${revisionEvents.actorName}, ${users.name})`, at: revisionEvents.at, reason: revisionEvents.reason, signature: revisionEvents.signature })
       .from(revisionEvents)
       .innerJoin(users, eq(users.id, revisionEvents.userId))
       .where(eq(revisionEvents.revisionId, rev.id))
       .orderBy(asc(revisionEvents.at), asc(revisionEvents.id)),
     ticksOf(rev.id),
     db
-      .select({ value: materialConfirmations.value, by: users.name, at: materialConfirmations.at })
+      .select({ value: materialConfirmations.value, by: sql<string>`coalesce(${materialConfirmations.userName}, ${users.name})`, at: materialConfirmations.at })
       .from(materialConfirmations)
       .innerJoin(users, eq(users.id, materialConfirmations.userId))
       .where(eq(materialConfirmations.revisionId, rev.id)),
@@ -108,14 +108,18 @@ export async function reportPackageOf(rev: Revision, others: Revision[], paper: 
   const outline = stepOutline({ calc: { type: calc.calcType }, result: rev.result as CalcResult })
   const numbers = new Map(outline.map((o) => [o.id, o.number]))
   const stepNumber = (id: string) => numbers.get(id) ?? null
+  const signOff = await signOffOf(rev, stepNumber, pending)
+  // The names printed are those the people had when they acted (kept with each event), so the
+  // record reads the same whatever anyone is called later.
+  const signer = (what: string, fallback: string | null) => [...signOff.events].reverse().find((e) => e.what === what)?.by ?? name(fallback)
   return {
     ...common(project, calc, paper),
     revision: {
       label: rev.label,
       state: rev.state,
-      engineer: { name: name(rev.engineerId), date: day(rev.createdAt) },
-      checker: { name: name(rev.checkerId), date: day(rev.checkedAt) },
-      approver: { name: name(rev.approverId), date: day(rev.approvedAt) },
+      engineer: { name: signer(ACTION_WORDS.submit, rev.engineerId), date: day(rev.createdAt) },
+      checker: { name: rev.checkerId ? signer(ACTION_WORDS.check, rev.checkerId) : '—', date: day(rev.checkedAt) },
+      approver: { name: rev.approverId ? signer(ACTION_WORDS.approve, rev.approverId) : '—', date: day(rev.approvedAt) },
     },
     history: historyOf(all),
     remarks: remarks.map((r) => ({
@@ -133,7 +137,7 @@ export async function reportPackageOf(rev: Revision, others: Revision[], paper: 
     generatedAt: rev.createdAt.toISOString(),
     engineVersion: rev.engineVersion,
     templateVersion: rev.templateVersion ?? TEMPLATE_VERSION,
-    signOff: await signOffOf(rev, stepNumber, pending),
+    signOff,
   }
 }
 

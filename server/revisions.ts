@@ -160,7 +160,7 @@ export async function saveRevision(caller: Caller | null, projectId: string, cal
     if (replaced.length) await tx.update(revisions).set({ state: 'superseded' }).where(inArray(revisions.id, replaced.map((r) => r.id)))
     await carryOverRemarks(tx, replaced.map((r) => r.id), rev)
     if (appendices.length) await tx.update(attachments).set({ revisionId: rev.id }).where(inArray(attachments.id, appendices.map((a) => a.id)))
-    await tx.insert(revisionEvents).values({ revisionId: rev.id, action: 'submit', fromState: null, toState: rev.state, userId: who.id, reason: rev.reason, at: now })
+    await tx.insert(revisionEvents).values({ revisionId: rev.id, action: 'submit', fromState: null, toState: rev.state, userId: who.id, actorName: who.name, reason: rev.reason, at: now })
     await tx
       .update(calcs)
       .set({ state: SUBMIT.to, updatedAt: now, checkerId: checkerId ?? calc.checkerId, approverId: approverId ?? calc.approverId })
@@ -207,7 +207,7 @@ async function refuseBlocked(t: TransitionSpec, rev: Revision, who: Caller, opts
       Object.fromEntries(missing.map((m) => [`materials.${m.key}`, m.source])),
     )
   }
-  return missing.map((m) => ({ revisionId: rev.id, value: m.key, userId: who.id }))
+  return missing.map((m) => ({ revisionId: rev.id, value: m.key, userId: who.id, userName: who.name }))
 }
 
 /**
@@ -271,6 +271,7 @@ export async function transitionRevision(
       fromState: rev.state,
       toState: t.to,
       userId: who.id,
+      actorName: who.name,
       reason,
       statement: signed?.statement ?? null,
       signature: signed?.signature ?? null,

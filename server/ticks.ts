@@ -1,4 +1,4 @@
-import { and, asc, eq } from 'drizzle-orm'
+import { and, asc, eq, sql } from 'drizzle-orm'
 import { db } from '@/db'
 import { audit } from '@/db/audit'
 import { revisions, stepTicks, users } from '@/db/schema'
@@ -8,7 +8,7 @@ import { authoriseCalc, type Caller } from './access'
 
 export async function ticksOf(revisionId: string) {
   return db
-    .select({ stepId: stepTicks.stepId, by: users.name, userId: stepTicks.userId, at: stepTicks.at })
+    .select({ stepId: stepTicks.stepId, by: sql<string>`coalesce(${stepTicks.userName}, ${users.name})`, userId: stepTicks.userId, at: stepTicks.at })
     .from(stepTicks)
     .innerJoin(users, eq(users.id, stepTicks.userId))
     .where(eq(stepTicks.revisionId, revisionId))
@@ -24,7 +24,7 @@ export async function setTick(caller: Caller | null, projectId: string, calcId: 
   if (rev.assignedCheckerId && rev.assignedCheckerId !== who.id) throw new AppError('forbidden', `Only the checker named for revision ${rev.label} ticks its steps.`)
   if (!((rev.result as CalcResult | null)?.steps ?? []).some((s) => s.id === stepId)) throw new AppError('not_found', `Revision ${rev.label} has no step ${stepId}.`)
   if (ticked) {
-    await db.insert(stepTicks).values({ revisionId, stepId, userId: who.id, at: new Date() }).onConflictDoNothing()
+    await db.insert(stepTicks).values({ revisionId, stepId, userId: who.id, userName: who.name, at: new Date() }).onConflictDoNothing()
   } else {
     await db.delete(stepTicks).where(and(eq(stepTicks.revisionId, revisionId), eq(stepTicks.stepId, stepId)))
   }

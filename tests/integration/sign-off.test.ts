@@ -178,9 +178,17 @@ describe('the issued PDF verifies, a changed copy does not', () => {
     // A direct SQL change of the issued row is refused by the database.
     await expect(db.update(revisions).set({ pdfHash: 'x' }).where(eq(revisions.id, rev))).rejects.toThrow()
     await expect(db.delete(revisions).where(eq(revisions.id, rev))).rejects.toThrow()
+    // The record prints names as they were: a later rename changes no copy of it.
+    const letter = (await revisionPdf(people.checker, projectId, c, rev, 'LETTER', real)).bytes
+    await db.update(users).set({ name: 'Mara Lind-Renamed' }).where(eq(users.id, people.approver.id))
+    await db.update(users).set({ name: 'Tomas Brandt-Renamed' }).where(eq(users.id, people.checker.id))
+    expect(Buffer.from((await revisionPdf(people.checker, projectId, c, rev, 'LETTER', real)).bytes).equals(Buffer.from(letter))).toBe(true)
+    expect(Buffer.from((await revisionPdf(people.checker, projectId, c, rev, 'A4', real)).bytes).equals(Buffer.from(bytes))).toBe(true)
+    await db.update(users).set({ name: 'Mara Lind' }).where(eq(users.id, people.approver.id))
+    await db.update(users).set({ name: 'Tomas Brandt' }).where(eq(users.id, people.checker.id))
     await act('LC-002', rev, 'void', people.approver, real, { reason: 'wrong load case' })
     expect(await verifyPdf(bytes)).toMatchObject({ issued: true, voided: true })
-  }, 180_000)
+  }, 240_000)
 })
 
 describe('notices', () => {
