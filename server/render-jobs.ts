@@ -3,7 +3,7 @@ import { db, type Tx } from '@/db'
 import { renderJobs, revisions } from '@/db/schema'
 import { sha256Hex } from '@/lib/calc/hash'
 import { INSTANCE_ID } from './mail/outbox'
-import { bodyKey, type RevisionDeps } from './revisions'
+import { bodyKey, type RevisionDeps } from './package-deps'
 import { attachmentBytes } from './attachments'
 import { reportPackageOf } from './report-package'
 

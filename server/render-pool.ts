@@ -2,7 +2,7 @@ import os from 'node:os'
 import path from 'node:path'
 import { Piscina } from 'piscina'
 import type { ReportPackage } from '@/reports/types'
-import type { ReportRenderer } from './revisions'
+import type { ReportRenderer } from './package-deps'
 
 /*
  * Package renders run in worker threads, never on the request thread: a pool sized to leave a core

@@ -11,10 +11,10 @@ import { AppError } from '@/lib/errors'
 import { stripControl } from '@/lib/schemas/clean-text'
 import type { ProjectRole } from '@/lib/review/roles'
 import { STATES, SUBMIT, transitionOf, type TransitionAction, type TransitionSpec } from '@/lib/review/workflow'
-import type { FileStore } from '@/lib/storage'
-import type { Paper, ReportPackage } from '@/reports/types'
+import type { Paper } from '@/reports/types'
 import { authoriseCalc, type Caller } from './access'
 import { attachmentBytes, pendingAttachmentRows } from './attachments'
+import { bodyKey, type RevisionDeps } from './package-deps'
 import { enqueueRender, kickRenderRunner } from './render-jobs'
 import { verifyPassword } from './auth/password'
 import { notify } from './notices'
@@ -22,18 +22,7 @@ import { carryOverRemarks, openRemarks } from './remarks'
 import { reportPackageOf, TEMPLATE_VERSION, type PendingEvent } from './report-package'
 import { signStatement, verificationCodeOf } from './signing'
 
-/** The report pipeline, passed in: the app loads it outside the Next bundle, tests import it directly. */
-export interface ReportRenderer {
-  /** The package's body (react-pdf): rendered once per revision and stored. */
-  renderBody(pkg: ReportPackage): Promise<Uint8Array>
-  /** Stamps a body for the package's state and signatures and appends the sign-off record and appendices. */
-  finishPdf(body: Uint8Array, pkg: ReportPackage): Promise<Uint8Array>
-}
-
-export interface RevisionDeps {
-  renderer: ReportRenderer
-  store: FileStore
-}
+export type { ReportRenderer, RevisionDeps } from './package-deps'
 
 /** A, B, …, Z, AA, AB, … */
 export function nextRevisionLabel(count: number): string {
@@ -49,9 +38,6 @@ export function nextRevisionLabel(count: number): string {
 async function revisionsOf(calcId: string) {
   return db.select().from(revisions).where(eq(revisions.calcId, calcId))
 }
-
-/** Where a revision's body is kept: written once when the revision is saved, read by every signature. */
-export const bodyKey = (revisionId: string) => `bodies/${revisionId}.pdf`
 
 async function storePdf(bytes: Uint8Array, deps: RevisionDeps) {
   const pdfHash = sha256Hex(bytes)
