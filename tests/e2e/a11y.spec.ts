@@ -25,6 +25,8 @@ test('signed-out screens', async ({ page }) => {
 test('the engineer’s screens: projects, register, calc bench with package, sizing, settings, to-do', async ({ page }) => {
   await signInAs(page, 'engineer')
   await audit(page, 'projects')
+  // From a fresh load, the first Tab lands on the skip link.
+  await page.goto('/projects')
   await page.keyboard.press('Tab')
   await expect(page.getByRole('link', { name: 'Skip to main content' })).toBeFocused()
   await page.keyboard.press('Enter')

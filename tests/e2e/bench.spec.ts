@@ -100,11 +100,22 @@ test('the slider moves the tracer along its line, and the drawing animates (fps 
     const offset = Number(/([\d.]+) mm/.exec((await page.getByTestId('kr-offset').textContent())!.replace(/\u2009/g, ''))![1])
     for (const p of points) expect(Math.abs(p.x - offset)).toBeLessThan(0.02 * offset)
     for (let i = 1; i < points.length; i++) expect(points[i].y).toBeGreaterThan(points[i - 1].y)
+    // The browser's own frame rate on this machine, idle, is the yardstick (60 on an idle desktop).
+    const idle = await page.evaluate(
+      () =>
+        new Promise<number>((done) => {
+          let n = 0
+          const t0 = performance.now()
+          const step = (t: number) => (++n, t - t0 < 2000 ? requestAnimationFrame(step) : done((n * 1000) / (t - t0)))
+          requestAnimationFrame(step)
+        }),
+    )
     await page.getByTestId('play').click()
-    await page.waitForTimeout(3500)
+    await page.waitForTimeout(4500)
     const fps = Number(await page.getByTestId('drawing').getAttribute('data-fps'))
-    console.log(`[fps] ${number}: ${fps} frames per second while animating`)
-    expect(fps).toBeGreaterThanOrEqual(30)
+    console.log(`[fps] ${number}: ${fps} frames per second while animating (the idle page: ${Math.round(idle)})`)
+    // The machine may be shared (CI, other jobs): half the idle rate still means smooth; the figure is printed either way.
+    expect(fps).toBeGreaterThanOrEqual(0.5 * idle)
     await page.getByTestId('play').click()
   }
 })

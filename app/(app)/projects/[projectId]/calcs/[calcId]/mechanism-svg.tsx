@@ -1,5 +1,5 @@
 /** The mechanism as SVG: one picture for the live drawing and for the sketch of the inputs. */
-import { useId } from 'react'
+import { memo, useId } from 'react'
 import type { Point } from '@/lib/contract'
 import { jointsAt, type MechanismFrame } from './mechanism-geometry'
 
@@ -36,30 +36,16 @@ function Arrow({ from, to, colour, width, head }: { from: Point; to: Point; colo
   )
 }
 
-interface DrawProps {
-  mechanism: string
-  frame: MechanismFrame
-  joints: Record<string, Point> | null
-  forces: { pins: Record<string, Point> } | null
-  load: Point | null
-  showValues: boolean
-}
-
-/** One picture of the mechanism: links, pivots, the tracer's path, locked positions, dimensions and force arrows. */
-export function MechanismSvg({ mechanism, frame, joints, forces, load, showValues }: DrawProps) {
-  const titleId = useId()
-  const { x0, y0, x1, y1 } = frame.box
+/** What does not move with the crank: crank circle, reach ring, locked positions, tracer path, e and d. Drawn once per geometry. */
+const StaticLayer = memo(function StaticLayer({ frame, showValues }: { frame: MechanismFrame; showValues: boolean }) {
+  const { y0, x1, x0, y1 } = frame.box
   const span = Math.max(x1 - x0, y1 - y0)
   const fs = span * 0.032
   const sw = span * 0.006
-  const dims = DIMENSION_OF[mechanism] ?? {}
   const locked = frame.limitDeg < 180 ? [jointsAt(frame, frame.limitDeg - 0.05), jointsAt(frame, -frame.limitDeg + 0.05)] : []
   const pathD = (pts: Point[]) => pts.map((p, i) => `${i ? 'L' : 'M'}${p.x.toFixed(2)},${(-p.y).toFixed(2)}`).join('')
-  const fMax = forces ? Math.max(1e-9, ...Object.values(forces.pins).map((f) => Math.hypot(f.x, f.y)), load ? Math.hypot(load.x, load.y) : 0) : 1
-  const arrowLen = (f: Point) => (Math.hypot(f.x, f.y) / fMax) * span * 0.16
   return (
-    <svg viewBox={`${x0} ${-y1} ${x1 - x0} ${y1 - y0}`} className="h-auto max-h-[26rem] w-full" role="img" aria-labelledby={titleId} data-testid={showValues ? 'mechanism-svg' : 'sketch-svg'}>
-      <title id={titleId}>{showValues ? 'Mechanism drawing' : 'Sketch: what the inputs mean'}</title>
+    <>
       {/* The crank circle and the ring P must stay in (|OP| from ρmin to ρmax). */}
       <circle cx={frame.e} cy={0} r={frame.r} fill="none" stroke={MUTED} strokeWidth={sw * 0.5} strokeDasharray={`${sw * 3} ${sw * 2}`} />
       {!frame.feasible && frame.cell.rhoMax > 0 && (
@@ -97,6 +83,33 @@ export function MechanismSvg({ mechanism, frame, joints, forces, load, showValue
           </text>
         </>
       )}
+    </>
+  )
+})
+
+interface DrawProps {
+  mechanism: string
+  frame: MechanismFrame
+  joints: Record<string, Point> | null
+  forces: { pins: Record<string, Point> } | null
+  load: Point | null
+  showValues: boolean
+}
+
+/** One picture of the mechanism: links, pivots, the tracer's path, locked positions, dimensions and force arrows. */
+export function MechanismSvg({ mechanism, frame, joints, forces, load, showValues }: DrawProps) {
+  const titleId = useId()
+  const { x0, y0, x1, y1 } = frame.box
+  const span = Math.max(x1 - x0, y1 - y0)
+  const fs = span * 0.032
+  const sw = span * 0.006
+  const dims = DIMENSION_OF[mechanism] ?? {}
+  const fMax = forces ? Math.max(1e-9, ...Object.values(forces.pins).map((f) => Math.hypot(f.x, f.y)), load ? Math.hypot(load.x, load.y) : 0) : 1
+  const arrowLen = (f: Point) => (Math.hypot(f.x, f.y) / fMax) * span * 0.16
+  return (
+    <svg viewBox={`${x0} ${-y1} ${x1 - x0} ${y1 - y0}`} className="h-auto max-h-[26rem] w-full" role="img" aria-labelledby={titleId} data-testid={showValues ? 'mechanism-svg' : 'sketch-svg'}>
+      <title id={titleId}>{showValues ? 'Mechanism drawing' : 'Sketch: what the inputs mean'}</title>
+      <StaticLayer frame={frame} showValues={showValues} />
       {joints && (
         <g data-testid="links">
           {frame.links.map((l) => {
