@@ -25,7 +25,7 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
           </Link>
           {user.isAdmin && mailInboxEnabled() && (
             <Link href="/admin/mail" className="hover:text-accent">
-              Caught mail
+              Local mailbox
             </Link>
           )}
         </nav>

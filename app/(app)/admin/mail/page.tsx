@@ -5,7 +5,7 @@ import { AppError } from '@/lib/errors'
 import { caughtMail } from '@/server/mail-inbox'
 import { outboxProblems } from '@/server/mail/outbox'
 
-export const metadata: Metadata = { title: 'Caught mail' }
+export const metadata: Metadata = { title: 'Local mailbox' }
 export const dynamic = 'force-dynamic'
 
 /** What the local fake mail server caught. Development and demo only. */
@@ -35,7 +35,7 @@ export default async function MailPage() {
           </ul>
         </section>
       )}
-      <h1 className="h1">Caught mail</h1>
+      <h1 className="h1">Local mailbox</h1>
       <p className="text-ink/70">Messages the local fake SMTP server received. Nothing here left this machine.</p>
       {mails.length === 0 && <p className="panel p-4 text-ink/60">No mail caught yet.</p>}
       {mails.map((m) => (
