@@ -15,8 +15,12 @@ export function geometryFields(calcType: CalcType): InputFieldDef[] {
 }
 
 export const STROKE_FIELDS: InputFieldDef[] = [
-  { path: 'requiredStroke', label: 'Stroke needed', unit: 'mm', hint: 'full travel along the line; leave empty to skip' },
+  { path: 'requiredStroke', label: 'Stroke needed', unit: 'mm', hint: 'full travel along the line; sets the working range unless end stops are given' },
+  { path: 'workingRange.fromDeg', label: 'End stop from', unit: '°', hint: 'crank angle of one end of the working range (optional)' },
+  { path: 'workingRange.toDeg', label: 'End stop to', unit: '°', hint: 'crank angle of the other end' },
   { path: 'toggleMarginDeg', label: 'Margin from toggle', unit: '°', hint: 'crank angle kept away from each locked position' },
+  { path: 'minTransmissionAngleDeg', label: 'Smallest transmission angle', unit: '°', step: '1', hint: 'checked over the working range; 30° is common practice' },
+  { path: 'straightnessTolerance', label: 'Straightness tolerance', unit: 'mm', step: '0.01', hint: 'largest deviation from the line over the working range' },
 ]
 
 export const BASIS_OPTIONS = [
