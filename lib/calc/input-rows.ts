@@ -1,5 +1,6 @@
 import { getMechanism } from '@/lib/mechanisms'
 import type { CalcInput } from './run'
+import { DEFAULT_MIN_TRANSMISSION_DEG, DEFAULT_STRAIGHTNESS_TOLERANCE } from './mechanism'
 
 export interface InputRow {
   group: string
@@ -93,7 +94,24 @@ export function inputRowsOf(input: CalcInput): InputRow[] {
     const value = geometry[f.key]
     if (value !== undefined) rows.push({ group: 'Geometry', label: f.description, value, unit: f.unit })
   }
-  rows.push({ group: 'Stroke', label: 'Margin kept from the toggle positions', value: m.toggleMarginDeg ?? 5, unit: '°' })
+  if (m.requiredStroke) rows.push({ group: 'Working range', label: 'Stroke the machine needs', value: m.requiredStroke, unit: 'mm' })
+  if (m.workingRange) {
+    rows.push({ group: 'Working range', label: 'End stop, crank angle', value: m.workingRange.fromDeg, unit: '°' })
+    rows.push({ group: 'Working range', label: 'Other end stop, crank angle', value: m.workingRange.toDeg, unit: '°' })
+  }
+  rows.push({ group: 'Working range', label: 'Margin kept from the locked positions', value: m.toggleMarginDeg ?? 5, unit: '°' })
+  rows.push({
+    group: 'Working range',
+    label: m.minTransmissionAngleDeg === undefined ? 'Smallest transmission angle (default, common practice)' : 'Smallest transmission angle',
+    value: m.minTransmissionAngleDeg ?? DEFAULT_MIN_TRANSMISSION_DEG,
+    unit: '°',
+  })
+  rows.push({
+    group: 'Working range',
+    label: m.straightnessTolerance === undefined ? 'Straightness tolerance (default)' : 'Straightness tolerance',
+    value: m.straightnessTolerance ?? DEFAULT_STRAIGHTNESS_TOLERANCE,
+    unit: 'mm',
+  })
   for (const l of m.loads) {
     rows.push({ group: 'Load cases (at the tracer)', label: `${l.name}: Fx`, value: l.fx, unit: 'N' })
     rows.push({ group: 'Load cases (at the tracer)', label: `${l.name}: Fy`, value: l.fy, unit: 'N' })

@@ -20,6 +20,9 @@ export const componentSchema = z.union([
     tension: num('tension').nonnegative({ error: 'tension is a magnitude; give it as a positive number' }).optional(),
     compression: num('compression').nonnegative({ error: 'compression is a magnitude; give it as a positive number' }).optional(),
     moment: num('moment').nonnegative({ error: 'moment is a magnitude' }).optional(),
+    /** Largest pin force on the eye (default: the larger axial force) and whether it may act across the link. */
+    eye: num('eye').nonnegative({ error: 'eye is a magnitude' }).optional(),
+    across: z.boolean().optional(),
   }),
 ])
 

@@ -122,6 +122,30 @@ function drawFrame(page: PDFPage, pkg: ReportPackage, f: Fonts) {
   page.drawText(mark, { x: width - OUTER_MARK.fromEdge + OUTER_MARK.size * 0.35, y: height / 2 - mw / 2, size: OUTER_MARK.size, font: f.regular, color: MUTED, rotate: degrees(90) })
 }
 
+/**
+ * textkit sets an empty glyph run (the end of a wrapped line) in its fallback font, Helvetica, which
+ * is never embedded. Those runs draw nothing; their font resource is pointed at the embedded Noto Sans
+ * so that every font of the package is embedded.
+ */
+function embedFallbacks(doc: PDFDocument, pages: PDFPage[], regular: PDFFont) {
+  const dropped = new Set<string>()
+  for (const page of pages) {
+    const fonts = page.node.Resources()?.lookupMaybe(PDFName.of('Font'), PDFDict)
+    if (!fonts) continue
+    for (const [name, ref] of fonts.entries()) {
+      const dict = ref instanceof PDFRef ? doc.context.lookupMaybe(ref, PDFDict) : undefined
+      const base = dict?.get(PDFName.of('BaseFont'))?.toString() ?? ''
+      if (!/^\/Helvetica/.test(base)) continue
+      fonts.set(name, regular.ref)
+      if (ref instanceof PDFRef) dropped.add(ref.toString())
+    }
+  }
+  for (const r of dropped) {
+    const [num, gen] = r.split(' ').map(Number)
+    doc.context.delete(PDFRef.of(num, gen))
+  }
+}
+
 /** Writes a value into a title-block cell (the cells sign-off owns). */
 function stampCell(page: PDFPage, pkg: ReportPackage, id: TitleCellId, text: string, font: PDFFont, color = INK, size: number = TITLE_BLOCK.valueSize) {
   const c = TITLE_BLOCK.cells.find((x) => x.id === id)!
@@ -288,6 +312,7 @@ export async function finishPdf(body: Uint8Array, pkg: ReportPackage, opts: Rend
   ])
   const fonts = { regular, bold, italic, mono }
   const bodyPages = out.getPages()
+  embedFallbacks(out, bodyPages, regular)
   const steps = stepPositions(out)
   const recordPages: PDFPage[] = []
   if (pkg.signOff) {

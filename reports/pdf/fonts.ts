@@ -69,6 +69,17 @@ export function registerFonts(opts: RenderOptions = {}): void {
   // The italic face is registered as its own upright family: formulas pick faces by glyph, not by style.
   Font.register({ family: MATH_MAIN, src: katexFont('KaTeX_Main-Regular.ttf', opts), fontWeight: 400, fontStyle: 'normal' })
   Font.register({ family: MATH_ITALIC, src: katexFont('KaTeX_Math-Italic.ttf', opts), fontWeight: 400, fontStyle: 'normal' })
+  // textkit falls back to Helvetica for a character no face of the stack has (a line break inside
+  // a Text, for one); the name is mapped to the shipped Noto faces so that every font is embedded.
+  Font.register({
+    family: 'Helvetica',
+    fonts: [
+      { src: f('NotoSans-Regular.ttf'), fontWeight: 400, fontStyle: 'normal' },
+      { src: f('NotoSans-Bold.ttf'), fontWeight: 700, fontStyle: 'normal' },
+      { src: f('NotoSans-Italic.ttf'), fontWeight: 400, fontStyle: 'italic' },
+      { src: f('NotoSans-BoldItalic.ttf'), fontWeight: 700, fontStyle: 'italic' },
+    ],
+  })
   Font.registerHyphenationCallback((word) => [word])
   registered = dir
   prepared = null

@@ -33,10 +33,17 @@ export function PdfTable({ view, size = 7.4, title = true, from = 0, to }: { vie
   })
   const head = (
     <View style={{ flexDirection: 'row', borderTopWidth: 0.9, borderBottomWidth: 0.5, borderColor: C.ink }} wrap={false}>
-      {view.headers.map((h, i) => (
-        // The unit gets its own line: left to textkit, "[N·mm]" breaks inside the bracket.
-        <Text key={i} style={[cellStyle(i), { fontSize: size - 0.4, fontStyle: 'italic', color: C.muted, lineHeight: LINE_H }]}>{h.replace(/ (\[[^\]]*\])$/, '\n$1')}</Text>
-      ))}
+      {view.headers.map((h, i) => {
+        // The unit gets its own line (a Text of its own: a line break inside Text falls back to Helvetica).
+        const m = /^(.*) (\[[^\]]*\])$/.exec(h)
+        const st = { fontSize: size - 0.4, fontStyle: 'italic' as const, color: C.muted, lineHeight: LINE_H, textAlign: view.numeric[i] ? ('right' as const) : ('left' as const) }
+        return (
+          <View key={i} style={cellStyle(i)}>
+            <Text style={st}>{m ? m[1] : h}</Text>
+            {m ? <Text style={st}>{m[2]}</Text> : null}
+          </View>
+        )
+      })}
     </View>
   )
   const caption = title ? <Text style={{ fontSize: 8.2, fontWeight: 700, marginBottom: 3, lineHeight: 1.3 }}>{from > 0 ? `${view.title} (continued)` : view.title}</Text> : null

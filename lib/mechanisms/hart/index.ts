@@ -15,5 +15,7 @@ export const hart = defineMechanism({
     ...CRANK_FIELDS,
   ],
   defaultGeometry: { long: 240, short: 100, ratio: 0.3, crank: 40, crankPivotOffset: 40 },
+  // Statics before its verification: the template prints the load steps, then the checks of equilibrium.
+  stepSections: ['geometry', 'kinematics', 'statics', 'verification', 'checks'],
   model: (g) => ({ cell: hartCell({ long: g.long, short: g.short, ratio: g.ratio }), crank: g.crank, offset: g.crankPivotOffset }),
 })
