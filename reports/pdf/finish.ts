@@ -303,13 +303,12 @@ export async function finishPdf(body: Uint8Array, pkg: ReportPackage, opts: Rend
   const date = new Date(pkg.generatedAt)
   const out = await PDFDocument.load(body, { updateMetadata: false })
   out.registerFontkit(fontkit)
-  const boldData = await font(opts, 'NotoSans-Bold.ttf')
-  const [regular, bold, italic, mono] = await Promise.all([
-    font(opts, 'NotoSans-Regular.ttf').then((b) => out.embedFont(b, { subset: true })),
-    out.embedFont(boldData, { subset: true }),
-    font(opts, 'NotoSans-Italic.ttf').then((b) => out.embedFont(b, { subset: true })),
-    font(opts, 'NotoSansMono-Regular.ttf').then((b) => out.embedFont(b, { subset: true })),
-  ])
+  // Read in parallel, embed in a fixed order: object numbers must not depend on which read finished first.
+  const [regularData, boldData, italicData, monoData] = await Promise.all(['NotoSans-Regular.ttf', 'NotoSans-Bold.ttf', 'NotoSans-Italic.ttf', 'NotoSansMono-Regular.ttf'].map((f) => font(opts, f)))
+  const regular = await out.embedFont(regularData, { subset: true })
+  const bold = await out.embedFont(boldData, { subset: true })
+  const italic = await out.embedFont(italicData, { subset: true })
+  const mono = await out.embedFont(monoData, { subset: true })
   const fonts = { regular, bold, italic, mono }
   const bodyPages = out.getPages()
   embedFallbacks(out, bodyPages, regular)
