@@ -6,7 +6,9 @@
 import { execFileSync } from 'node:child_process'
 import { mkdirSync, rmSync, writeFileSync } from 'node:fs'
 import { join } from 'node:path'
-import { PDFDocument, StandardFonts } from 'pdf-lib'
+import { readFileSync } from 'node:fs'
+import fontkit from '@pdf-lib/fontkit'
+import { PDFDocument } from 'pdf-lib'
 import { renderPdf, renderWebDocument, type ReportPackage } from '../reports/index'
 import { DEMO_CALCS, demoPackage } from '../reports/demo'
 
@@ -14,7 +16,9 @@ import { DEMO_CALCS, demoPackage } from '../reports/demo'
 async function sampleAttachment(): Promise<Uint8Array> {
   const doc = await PDFDocument.create()
   const page = doc.addPage([595.28, 841.89])
-  const font = await doc.embedFont(StandardFonts.Helvetica)
+  // An embedded face, so the sample does not bring an unembedded standard font into the package.
+  doc.registerFontkit(fontkit)
+  const font = await doc.embedFont(readFileSync(join(process.cwd(), 'fonts', 'NotoSans-Regular.ttf')), { subset: true })
   page.drawText('Supplier data sheet: pin material certificate (sample)', { x: 60, y: 760, size: 14, font })
   doc.setCreationDate(new Date('2025-01-01T00:00:00Z'))
   doc.setModificationDate(new Date('2025-01-01T00:00:00Z'))

@@ -29,7 +29,12 @@ export function sweepTables(ctx: ReportContext): Table[] {
         driveTorque: p.driveTorque,
         transmissionDeg: p.transmissionAngleDeg ?? 90,
       }
-      for (let k = 0; k < linkNames.length; k++) row[linkKeys[k]] = p.linkForces[linkNames[k]]
+      // Round-off in a link that carries no axial force (1e-13 N in a bending crank) is shown as 0, as the envelope does.
+      const noise = 1e-9 * Math.max(1, ...Object.values(p.pinForces).map((f) => f.magnitude))
+      for (let k = 0; k < linkNames.length; k++) {
+        const v = p.linkForces[linkNames[k]]
+        row[linkKeys[k]] = Math.abs(v) < noise ? 0 : v
+      }
       return row
     }),
   }))
