@@ -135,10 +135,12 @@ export async function saveRevision(caller: Caller | null, projectId: string, cal
   await db.transaction(async (tx) => {
     const existing = await tx.select().from(revisions).where(eq(revisions.calcId, calc.id))
     const newest = [...existing].sort((a, b) => b.createdAt.getTime() - a.createdAt.getTime())[0]
-    // A second save of the same content moments after the first (a double click, two tabs, two
-    // instances) is the same revision: one wins, the other is told that nothing changed.
-    if (newest && newest.contentHash === rev.contentHash && newest.state === SUBMIT.to && now.getTime() - newest.createdAt.getTime() < DUPLICATE_SAVE_MS) {
-      throw new AppError('conflict', `Revision ${newest.label} with exactly these inputs was saved a moment ago; nothing was changed.`)
+    // A second save of the same content for the same reason moments after the first (a double
+    // click, two tabs, two instances) is the same revision: one wins, the other is told that
+    // nothing changed.
+    const same = newest && newest.contentHash === rev.contentHash && newest.reason === rev.reason && newest.state === SUBMIT.to
+    if (same && now.getTime() - newest.createdAt.getTime() < DUPLICATE_SAVE_MS) {
+      throw new AppError('conflict', `Revision ${newest!.label} with exactly these inputs and reason was saved a moment ago; nothing was changed.`)
     }
     rev.label = nextRevisionLabel(existing.length)
     const replaced = superseding(existing, SUBMIT.supersedes, rev.id)

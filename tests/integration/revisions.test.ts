@@ -16,6 +16,7 @@ import { seededDemo, type DemoRole } from '../helpers/demo'
 import { useTempEnvironment } from '../helpers/temp-env'
 
 let env: Awaited<ReturnType<typeof useTempEnvironment>>
+let saves = 0
 let deps: RevisionDeps
 let people: Record<DemoRole, Caller>
 let projectId = ''
@@ -37,7 +38,7 @@ async function refused(p: Promise<unknown>, pattern: RegExp) {
 
 const calcByNumber = async (n: string) => (await db.select().from(calcs).where(eq(calcs.number, n)))[0]
 const save = async (n: string, who: Caller) => {
-  const id = await saveRevision(who, projectId, await calcId(n), deps, { reason: 'test', confirmFailing: true })
+  const id = await saveRevision(who, projectId, await calcId(n), deps, { reason: `test ${++saves}`, confirmFailing: true })
   await drainRenderJobs(deps)
   return id
 }

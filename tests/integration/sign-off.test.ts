@@ -21,6 +21,7 @@ import { seededDemo, type DemoRole } from '../helpers/demo'
 import { useTempEnvironment } from '../helpers/temp-env'
 
 let env: Awaited<ReturnType<typeof useTempEnvironment>>
+let saves = 0
 let people: Record<DemoRole, Caller>
 let projectId = ''
 let calcId: (n: string) => Promise<string>
@@ -40,7 +41,7 @@ beforeAll(async () => {
 afterAll(() => env.close())
 
 const submit = async (n: string, deps = fake) => {
-  const id = await saveRevision(people.engineer, projectId, await calcId(n), deps, { reason: 'test', confirmFailing: true })
+  const id = await saveRevision(people.engineer, projectId, await calcId(n), deps, { reason: `test ${++saves}`, confirmFailing: true })
   await drainRenderJobs(deps)
   return id
 }
