@@ -74,7 +74,7 @@ describe('a test-only mechanism registered at run time', () => {
     })
     expect(pkg.calc.type).toBe('test-cell')
     const html = await renderWebHtml(pkg)
-    expect(html).toContain('T-1-001 (Test cell (k and s given))')
+    expect(html).toContain('T-1-001, Test cell (k and s given)')
     expect(html).toContain('A test-only mechanism, rendered through the registry.')
     expect(html).toContain(`${DIAGRAM_MARK} (start, end; ${pkg.result.positions?.length} positions)`)
     // Numbered in the mechanism's declared order (statics before verification), the same numbers as stepOutline.
