@@ -97,7 +97,7 @@ export const texNumberP = (x: number): string => (roundShown(x) < 0 ? `\\left(${
 /** Utilisation as shown: three decimals, rounded up, so a value above 1 never reads as 1.000. */
 export function utilisationShown(u: number): number {
   if (!Number.isFinite(u)) return u
-  return Math.max(0, roundTo(u, 0.001, 'up'))
+  return Math.max(0, Number(roundTo(u, 0.001, 'up').toFixed(3)))
 }
 
 export function formatUtilisation(u: number): string {
