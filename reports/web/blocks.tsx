@@ -60,7 +60,7 @@ export function StepBox({ v }: { v: StepView }) {
         {v.criterion ? <span className="inv-criterion"><Tex tex={v.criterion} /></span> : null}
         {v.verdictLabel ? <span className="inv-verdict-word">{v.verdictLabel}</span> : null}
       </div>
-      <div className="inv-check" aria-label="checker" />
+      <div className="inv-check" role="note" aria-label="Checker’s column" />
     </div>
   )
 }

@@ -62,7 +62,7 @@ export function Wrapper({ children }: { children?: ReactNode }) {
         <div><small>Calculation</small>{pkg.calc.number}</div>
         <div><small>Revision · state</small>{`${pkg.revision.label} · ${STATE_LABEL[pkg.revision.state]}`}</div>
       </header>
-      {mark ? <div className="inv-watermark" aria-hidden="true">{mark}</div> : null}
+      {mark ? <div className="inv-watermark" aria-hidden="true" data-mark={mark} /> : null}
       {children}
     </article>
   )

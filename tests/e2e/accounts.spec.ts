@@ -8,7 +8,7 @@ test('a wrong password and an unknown e-mail get the same message at the passwor
     await page.getByLabel('Password').fill('definitely-wrong')
     await page.getByRole('button', { name: 'Sign in' }).click()
     await expect(page.locator('#f-password-error')).toHaveText('E-mail or password is wrong.')
-    await expect(page.locator('#f-email-error')).toHaveCount(0)
+    await expect(page.locator('#f-email-error')).toHaveText('')
     await expect(page.getByLabel('E-mail')).toHaveValue(email)
   }
 })
@@ -27,7 +27,8 @@ test('pages and API answers carry the security headers; pages hydrate under the 
   expect(h['referrer-policy']).toBe('strict-origin-when-cross-origin')
   // Next put this response's nonce on its scripts.
   const nonce = csp.match(/'nonce-([^']+)'/)![1]
-  expect(await page.locator(`script[nonce="${nonce}"]`).count()).toBeGreaterThan(0)
+  // (Read from the HTML as sent: browsers hide a nonce attribute's value from the DOM.)
+  expect(await res!.text()).toContain(`nonce="${nonce}"`)
   // Hydrated: React has attached itself to the form (blocked scripts would leave plain HTML).
   await expect.poll(() => page.locator('form').evaluate((el) => Object.keys(el).some((k) => k.startsWith('__react')))).toBe(true)
   expect(violations).toEqual([])
@@ -44,15 +45,16 @@ test('the engineer creates a draft calc; a duplicate number is refused at the nu
   await signInAs(page, 'engineer')
   await openDemoProject(page)
   const form = page.getByTestId('create-calc')
-  await form.getByLabel('Number').fill('LC-010')
+  await form.getByLabel('Number').fill('LC-020')
   await form.getByLabel('Title').fill('Lid tucker guide')
-  await form.getByRole('button', { name: 'Create draft' }).click()
-  await expect(form.getByRole('alert')).toContainText('LC-010 created')
-  await expect(page.getByTestId('register').getByRole('link', { name: 'LC-010' })).toBeVisible()
+  await form.getByRole('button', { name: 'Create and open' }).click()
+  await expect(page.getByRole('heading', { level: 1 })).toContainText('LC-020', { timeout: 30_000 })
+  await page.goBack()
+  await expect(page.getByTestId('register').getByRole('link', { name: 'LC-020' })).toBeVisible()
 
-  await form.getByLabel('Number').fill('LC-001')
+  await form.getByLabel('Number').fill('lc-001')
   await form.getByLabel('Title').fill('Duplicate')
-  await form.getByRole('button', { name: 'Create draft' }).click()
+  await form.getByRole('button', { name: 'Create and open' }).click()
   await expect(form.locator('#f-number-error')).toContainText('already exists')
   await expect(form.getByLabel('Title')).toHaveValue('Duplicate')
 })
@@ -68,12 +70,12 @@ test('an admin invites a person; the caught mail link lets them set a password a
   await expect(form.getByRole('alert')).toContainText('Invitation sent')
 
   // The mail goes out through the outbox a moment after the action: reload until it is caught.
-  await page.getByRole('link', { name: 'Caught mail' }).click()
+  await page.getByRole('link', { name: 'Local mailbox' }).click()
   const mail = page.locator('article', { hasText: 'ola.nord@feldmark.example' }).first()
   await expect(async () => {
     await page.reload()
     await expect(mail).toContainText('Invitation to Carton erector CE-40', { timeout: 1000 })
-  }).toPass({ timeout: 20_000 })
+  }).toPass({ timeout: 90_000 })
   const link = (await mail.locator('pre').innerText()).match(/http\S+/)![0]
 
   const guest = await browser.newContext()
