@@ -65,6 +65,8 @@ function verify(kind: string, r: { checks: Item[]; steps: StepLike[]; cautions: 
     expect(step!.source, c.stepId).toMatch(REF[kind])
     expect(c.clause.length).toBeGreaterThan((step!.source as string).length - 30)
     expect(c.unit, c.stepId).toBe(UNIT[kind][c.stepId.split('.').pop()!])
+    // a printed comparison agrees with the verdict: '>' exactly when the check fails
+    if (/\\le|\s>\s/.test(tex ?? '')) expect(/\s>\s/.test(tex ?? ''), `comparison sign vs verdict (pass ${c.pass}) in ${c.stepId}: ${tex}`).toBe(!c.pass)
     if (!(c.unit === '—' && c.capacity === 1)) expect(prints(tex, c.capacity), `capacity ${c.capacity} not printed in ${where}`).toBe(true)
     expect(prints(tex, c.demand) || prints(force!.substituted, c.demand), `demand ${c.demand} not printed in ${where}`).toBe(true)
     expect(c.utilisation).toBeCloseTo(c.demand / c.capacity, 12)
