@@ -37,7 +37,7 @@ test('pages and API answers carry the security headers; pages hydrate under the 
   expect(api.status()).toBe(401)
   expect(api.headers()['cache-control']).toBe('private, no-store')
   expect(api.headers()['x-content-type-options']).toBe('nosniff')
-  const foreign = await request.post('/api/v1/projects', { headers: { origin: 'https://evil.example', 'content-type': 'text/plain' }, data: '{}' })
+  const foreign = await request.post('/api/v1/analyse', { headers: { origin: 'https://evil.example', 'content-type': 'text/plain' }, data: '{}' })
   expect(foreign.status()).toBe(403)
 })
 
@@ -60,6 +60,7 @@ test('the engineer creates a draft calc; a duplicate number is refused at the nu
 })
 
 test('an admin invites a person; the caught mail link lets them set a password and sign in', async ({ page, browser }) => {
+  test.setTimeout(180_000)
   await signInAs(page, 'admin')
   await openDemoProject(page)
   await page.getByTestId('manage-members').click()
@@ -70,7 +71,8 @@ test('an admin invites a person; the caught mail link lets them set a password a
   await expect(form.getByRole('alert')).toContainText('Invitation sent')
 
   // The mail goes out through the outbox a moment after the action: reload until it is caught.
-  await page.getByRole('link', { name: 'Local mailbox' }).click()
+  await expect(page.getByRole('link', { name: 'Local mailbox' })).toBeVisible()
+  await page.goto('/admin/mail')
   const mail = page.locator('article', { hasText: 'ola.nord@feldmark.example' }).first()
   await expect(async () => {
     await page.reload()
