@@ -50,6 +50,7 @@ export const BACK_MATTER = [
   { id: 'references', title: 'References', continues: true },
   { id: 'cautions', title: 'Cautions and limits', continues: true },
   { id: 'revisions', title: 'Revision history and remarks', continues: true },
+  { id: 'changes', title: 'Changes since the previous revision', continues: true },
   { id: 'signatures', title: 'Signatures', continues: true },
   { id: 'working', title: 'Appendix: working in full', continues: false },
 ] as const

@@ -19,6 +19,7 @@ import type {
   StrokeLimits,
   Table,
 } from '../lib/contract'
+import type { InputRowChange, ResultChanges } from '../lib/review/compare'
 
 export type { CalcResult, CheckItem, Feasibility, LinkTopology, LoadCaseEnvelope, MechanismId, Point, PositionResult, Step, Table }
 
@@ -108,6 +109,14 @@ export interface ReportPackage {
   templateVersion: string
   /** Present once the revision has been submitted: the record of its sign-off. */
   signOff?: SignOff
+  /** What changed since the calc's revision before this one; absent for the first. */
+  changes?: RevisionChanges
+}
+
+export interface RevisionChanges extends ResultChanges {
+  /** Label of the earlier revision. */
+  since: string
+  inputs: InputRowChange[]
 }
 
 export interface RenderOptions {

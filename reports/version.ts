@@ -1,2 +1,2 @@
 /** Bumped whenever a template or report component changes what a package shows. Frozen into every revision. */
-export const TEMPLATE_VERSION = '3'
+export const TEMPLATE_VERSION = '4'

@@ -51,6 +51,10 @@ export async function getCalcWorkspace(caller: Caller | null, projectId: string,
   ])
   const name = (id: string | null) => (id ? (members.find((m) => m.userId === id)?.name ?? '—') : null)
   const people = (role: string) => members.filter((m) => m.role === role && m.active).map((m) => ({ id: m.userId, name: m.name }))
+  // A new revision goes to whoever signed off the last one by default (or the only one there is).
+  const suggested = (list: { id: string }[], last: string | null | undefined) => (list.some((p) => p.id === last) ? last! : list.length === 1 ? list[0].id : '')
+  const checkers = people('checker')
+  const approvers = people('approver')
   const working = calc.draftResult as CalcResult | null
   return {
     ...access,
@@ -61,8 +65,10 @@ export async function getCalcWorkspace(caller: Caller | null, projectId: string,
     ticks,
     pending,
     materials,
-    checkers: people('checker'),
-    approvers: people('approver'),
+    checkers,
+    approvers,
+    suggestedChecker: suggested(checkers, revisions[0]?.assignedCheckerId ?? revisions[0]?.checkerId),
+    suggestedApprover: suggested(approvers, revisions[0]?.assignedApproverId ?? revisions[0]?.approverId),
     workingFails: working && working.feasibility.ok && !working.verdict.pass ? working.verdict.governing : null,
     revisions: revisions.map((r, i) => ({
       ...r,

@@ -7,8 +7,10 @@ import { ENGINE_VERSION } from '@/lib/calc/version'
 import { SEVERITY_LABELS } from '@/lib/review/workflow'
 import { remarksWithThreads } from './remarks'
 import { stepOutline } from '@/reports/model/outline'
-import type { CalcType, Paper, ReportPackage, SignOff } from '@/reports/types'
+import type { CalcType, InputRow, Paper, ReportPackage, RevisionChanges, SignOff } from '@/reports/types'
 import { ticksOf } from './ticks'
+import { compareInputRows, compareResults } from '@/lib/review/compare'
+import { storedInputRows } from './compare'
 import { TEMPLATE_VERSION } from '@/reports/version'
 
 export { TEMPLATE_VERSION }
@@ -29,6 +31,12 @@ function historyOf(all: Revision[]) {
     date: day(r.issuedAt ?? r.approvedAt ?? r.checkedAt ?? r.createdAt) ?? '',
     note: r.reason ?? (r.submittedFailing ? 'submitted with a failing check' : ''),
   }))
+}
+
+/** What changed since `earlier` (the calc's revision before), for the package's "changes since" section. */
+function changesSince(earlier: Revision | undefined, rows: InputRow[], result: CalcResult): RevisionChanges | undefined {
+  if (!earlier) return undefined
+  return { since: earlier.label, inputs: compareInputRows(storedInputRows(earlier.inputs), rows), ...compareResults(earlier.result as CalcResult, result) }
 }
 
 function common(project: Project, calc: Calc, paper: Paper) {
@@ -105,6 +113,7 @@ export async function reportPackageOf(rev: Revision, others: Revision[], paper: 
   const parsed = parseCalcInput(rev.inputs)
   if (!parsed.ok) throw new Error(`stored inputs of revision ${rev.label} no longer parse: ${JSON.stringify(parsed.fieldErrors)}`)
   const all = [...others.filter((r) => r.id !== rev.id), rev].sort((a, b) => a.createdAt.getTime() - b.createdAt.getTime())
+  const inputRows = inputRowsOf(parsed.input)
   const outline = stepOutline({ calc: { type: calc.calcType }, result: rev.result as CalcResult })
   const numbers = new Map(outline.map((o) => [o.id, o.number]))
   const stepNumber = (id: string) => numbers.get(id) ?? null
@@ -131,8 +140,9 @@ export async function reportPackageOf(rev: Revision, others: Revision[], paper: 
       status: r.status,
       date: day(r.createdAt) ?? '',
     })),
-    inputRows: inputRowsOf(parsed.input),
+    inputRows,
     result: rev.result as CalcResult,
+    changes: changesSince(all[all.indexOf(rev) - 1], inputRows, rev.result as CalcResult),
     // Fixed at submission: the body is rendered once and every stamp keeps its dates.
     generatedAt: rev.createdAt.toISOString(),
     engineVersion: rev.engineVersion,
@@ -155,13 +165,15 @@ export async function draftReportPackage(project: Project, calc: Calc): Promise<
   if (!parsed.ok || !calc.draftResult) return null
   const all = await db.select().from(revisions).where(eq(revisions.calcId, calc.id)).orderBy(asc(revisions.createdAt))
   const name = await namesOf([calc.engineerId])
+  const inputRows = inputRowsOf(parsed.input)
   return {
     ...common(project, calc, 'A4'),
     revision: { label: 'working copy', state: 'draft', engineer: { name: name(calc.engineerId) }, checker: { name: '—' }, approver: { name: '—' } },
     history: historyOf(all),
     remarks: [],
-    inputRows: inputRowsOf(parsed.input),
+    inputRows,
     result: calc.draftResult as CalcResult,
+    changes: changesSince(all.at(-1), inputRows, calc.draftResult as CalcResult),
     generatedAt: calc.updatedAt.toISOString(),
     engineVersion: ENGINE_VERSION,
     templateVersion: TEMPLATE_VERSION,

@@ -167,6 +167,8 @@ export const compareOut = z.object({
   from: z.object({ id: z.string(), label: z.string() }),
   to: z.object({ id: z.string(), label: z.string() }),
   inputs: z.array(z.object({ path: z.string(), from: z.unknown(), to: z.unknown() })),
+  /** The same changes as the package's inputs table prints them: group · label, unit. */
+  inputRows: z.array(z.object({ input: z.string(), unit: z.string(), from: z.union([z.number(), z.string()]).nullable(), to: z.union([z.number(), z.string()]).nullable() })),
   verdict: z.object({ from: z.unknown(), to: z.unknown(), changed: z.boolean() }),
   values: z.array(valueChange),
   checks: z.array(valueChange.extend({ fromPass: z.boolean().nullable(), toPass: z.boolean().nullable() })),

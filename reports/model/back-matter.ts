@@ -10,10 +10,16 @@ export function backMatterSections(ctx: ReportContext, start: number): BackMatte
     cautions: true,
     // Always present, so section numbers do not move as a revision collects remarks and signatures.
     revisions: true,
+    // Fixed when the revision is saved: the calc's revision before it does not change.
+    changes: !!ctx.pkg.changes,
     signatures: true,
     working: hasWorkingAppendix(ctx.pkg),
   }
-  const out: BackMatterSection[] = BACK_MATTER.filter((s) => present[s.id] && s.id !== 'working').map((s, i) => ({ ...s, number: start + i }))
+  const out: BackMatterSection[] = BACK_MATTER.filter((s) => present[s.id] && s.id !== 'working').map((s, i) => ({
+    ...s,
+    title: s.id === 'changes' ? `Changes since rev ${ctx.pkg.changes!.since}` : s.title,
+    number: start + i,
+  }))
   if (ctx.pkg.attachments.length > 0) out.push({ id: 'appendices', title: 'Attached documents', number: start + out.length, continues: true })
   // The working in full is the package's own appendix: lettered, after everything the body numbers.
   if (present.working) out.push({ id: 'working', title: 'Appendix: working in full', number: 'A', continues: false })

@@ -329,3 +329,52 @@ export function titleView(pkg: ReportPackage, resultHash: string): TitleView {
     ],
   }
 }
+
+/** The "changes since" section: what changed from the calc's revision before, in words and three tables. */
+export interface ChangesView {
+  summary: string
+  tables: TableView[]
+}
+
+export function changesView(ctx: ReportContext): ChangesView | null {
+  const c = ctx.pkg.changes
+  if (!c) return null
+  const was = `rev ${c.since}`
+  const now = /^[A-Z]+$/.test(ctx.pkg.revision.label) ? `rev ${ctx.pkg.revision.label}` : ctx.pkg.revision.label
+  const verdict = (v: { pass: boolean; governing: string; maxUtilisation: number }) =>
+    `${v.pass ? 'PASS' : 'FAIL'}, governed by ${v.governing} (u = ${formatUtilisation(v.maxUtilisation)})`
+  const count = (n: number, what: string) => `${n} ${what}${n === 1 ? '' : 's'}`
+  const summary = [
+    c.verdict.changed
+      ? `The verdict changed: ${was} ${verdict(c.verdict.from)}; ${now} ${verdict(c.verdict.to)}.`
+      : `The verdict is unchanged: ${verdict(c.verdict.to)}${c.verdict.from.maxUtilisation !== c.verdict.to.maxUtilisation ? ` (${was}: u = ${formatUtilisation(c.verdict.from.maxUtilisation)})` : ''}.`,
+    `Since ${was}, ${count(c.inputs.length, 'input')}, ${count(c.values.length, 'step value')} and ${count(c.checks.length, 'check')} changed.`,
+  ].join(' ')
+  const show = (v: number | string | null) => (v === null ? '—' : typeof v === 'number' ? formatNumber(v) : v)
+  const pct = (p: number | null) => (p === null ? '—' : `${p > 0 ? '+' : ''}${formatNumber(p)} %`)
+  const pass = (p: boolean | null) => (p === null ? '—' : p ? 'pass' : 'fails')
+  const tables: TableView[] = [
+    {
+      id: 'changes-inputs',
+      title: `Inputs changed (${c.inputs.length})`,
+      headers: ['input', 'unit', was, now],
+      numeric: [false, false, true, true],
+      rows: c.inputs.map((r) => [r.input, r.unit || '—', show(r.from), show(r.to)]),
+    },
+    {
+      id: 'changes-checks',
+      title: `Checks whose utilisation or verdict changed (${c.checks.length})`,
+      headers: ['component · check', `u ${was}`, `u ${now}`, 'change', 'verdict'],
+      numeric: [false, true, true, true, false],
+      rows: c.checks.map((k) => [k.title, k.from === null ? '—' : formatUtilisation(k.from), k.to === null ? '—' : formatUtilisation(k.to), k.change === null ? '—' : formatNumber(k.change), `${pass(k.fromPass)} → ${pass(k.toPass)}`]),
+    },
+    {
+      id: 'changes-values',
+      title: `Step values changed (${c.values.length})`,
+      headers: ['step', 'value', 'unit', was, now, 'change', '%'],
+      numeric: [true, false, false, true, true, true, true],
+      rows: c.values.map((v) => [stepRef(ctx, v.id), v.title, v.unit || '—', show(v.from), show(v.to), v.change === null ? '—' : formatNumber(v.change), pct(v.percent)]),
+    },
+  ]
+  return { summary, tables: tables.filter((t) => t.rows.length > 0) }
+}

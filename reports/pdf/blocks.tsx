@@ -4,7 +4,7 @@ import { useReport } from '../model/react-context'
 import type { FigureView } from '../model/figures'
 import { diagramFigure, plotFigure, utilisationFigure } from '../model/figures'
 import {
-  cautions, componentTable, criteriaTable, detailingTable, governingTables, historyTable, inputsTable, materialsTable, references, remarksTable, signatories, tableView, titleView, verdictView,
+  cautions, changesView, componentTable, criteriaTable, detailingTable, governingTables, historyTable, inputsTable, materialsTable, references, remarksTable, signatories, tableView, titleView, verdictView,
 } from '../model/views'
 import { formatUtilisation } from '../model/format'
 import { UGlyph } from './steps'
@@ -185,6 +185,18 @@ export function RemarksLog() {
   return ctx.pkg.remarks.length ? <PdfTable view={remarksTable(ctx.pkg, ctx)} size={7.2} /> : <Text style={{ color: C.muted }}>No remarks recorded.</Text>
 }
 
+/** What changed since the calc's revision before: the verdict in words, then inputs, checks and step values. */
+export function Changes() {
+  const v = changesView(useReport())
+  if (!v) return null
+  return (
+    <View>
+      <Text style={{ marginBottom: 6 }}>{v.summary}</Text>
+      {v.tables.map((t) => <PdfTable key={t.id} view={t} size={7} />)}
+    </View>
+  )
+}
+
 export function SignatureBlock() {
   const { pkg } = useReport()
   return (
@@ -244,6 +256,14 @@ registerBlockHeight(References, (_el, ctx, width) => {
 })
 registerBlockHeight(Cautions, (_el, ctx, width) => linesHeight(cautions(ctx.pkg), width - 3))
 
+registerBlockHeight(Changes, (_el, ctx, width) => {
+  const v = changesView(ctx)
+  return v ? linesHeight([v.summary], width + 11) + v.tables.reduce((a, t) => a + tableHeight(t, 7, true, width) + 8, 0) : 0
+})
+registerBlockExpand(Changes, (_el, ctx) => {
+  const v = changesView(ctx)
+  return v ? [<Text key="summary" style={{ marginBottom: 6 }}>{v.summary}</Text>, ...v.tables.map((t) => <PdfTable key={t.id} view={t} size={7} />)] : []
+})
 registerBlockExpand(GoverningTables, (_el, ctx) => governingTables(ctx).map((t) => <PdfTable key={t.id} view={t} size={7} />))
 registerBlockExpand(ChecksTable, (_el, ctx) => {
   const checks = ctx.pkg.result.checks ?? []

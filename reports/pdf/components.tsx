@@ -86,6 +86,7 @@ const BACK_BODY: Record<string, (ctx: ReportContext) => ReactNode> = {
   // Sign-off changes these, so the PDF keeps them out of the rendered body: finishPdf writes them
   // into the sign-off record at the end, and the names into the strip at the foot of every page.
   revisions: () => <Text>The revision history and the checker’s remarks, with their replies, are in the sign-off record at the end of this package.</Text>,
+  changes: () => <B.Changes />,
   signatures: () => <Text>Who prepared, checked, approved and issued this revision, and when, is printed at the foot of every page and in the sign-off record, with the server’s signature of each step.</Text>,
   appendices: () => <Appendices />,
 }

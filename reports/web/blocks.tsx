@@ -3,7 +3,7 @@ import { stepAnchor } from '../model/context'
 import { useReport } from '../model/react-context'
 import { diagramFigure, plotFigure, utilisationFigure, type FigureView } from '../model/figures'
 import {
-  cautions, componentTable, criteriaTable, detailingTable, governingTables, historyTable, inputsTable, materialsTable, references, remarksTable, signatories, stepView, tableView, titleView, verdictView,
+  cautions, changesView, componentTable, criteriaTable, detailingTable, governingTables, historyTable, inputsTable, materialsTable, references, remarksTable, signatories, stepView, tableView, titleView, verdictView,
   type StepView, type TableView,
 } from '../model/views'
 import { formatUtilisation } from '../model/format'
@@ -202,6 +202,12 @@ export const RevisionHistory = () => {
 export function RemarksLog() {
   const ctx = useReport()
   return ctx.pkg.remarks.length ? <HtmlTable view={remarksTable(ctx.pkg, ctx)} /> : <p>No remarks recorded.</p>
+}
+
+export function Changes() {
+  const v = changesView(useReport())
+  if (!v) return null
+  return <><p>{v.summary}</p>{v.tables.map((t) => <HtmlTable key={t.id} view={t} />)}</>
 }
 
 export function SignatureBlock() {

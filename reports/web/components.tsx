@@ -32,6 +32,7 @@ const BACK_BODY: Record<string, () => ReactNode> = {
   references: () => <B.References />,
   cautions: () => <B.Cautions />,
   revisions: () => <><B.RevisionHistory /><B.RemarksLog /></>,
+  changes: () => <B.Changes />,
   signatures: () => <B.SignatureBlock />,
   appendices: () => <Appendices />,
   working: () => <B.AppendixSteps />,

@@ -17,7 +17,9 @@ import { drainRenderJobs } from '@/server/render-jobs'
 import { revisionPdf, saveRevision, transitionRevision, type RevisionDeps } from '@/server/revisions'
 import { verifyCode, verifyPdf } from '@/server/verify'
 import { listCaughtMail } from '@/lib/mail/inbox'
+import { formatNumber } from '@/lib/units/format'
 import { seededDemo, type DemoRole } from '../helpers/demo'
+import { pdfText } from '../reports/helpers'
 import { useTempEnvironment } from '../helpers/temp-env'
 
 let env: Awaited<ReturnType<typeof useTempEnvironment>>
@@ -189,6 +191,26 @@ describe('the issued PDF verifies, a changed copy does not', () => {
     await db.update(users).set({ name: 'Tomas Brandt' }).where(eq(users.id, people.checker.id))
     await act('LC-002', rev, 'void', people.approver, real, { reason: 'wrong load case' })
     expect(await verifyPdf(bytes)).toMatchObject({ issued: true, voided: true })
+  }, 240_000)
+})
+
+describe('a later revision says what changed', () => {
+  it('its package carries a "changes since" section: the changed input, the step values, the verdict', async () => {
+    const c = await calcId('LC-001')
+    const [previous] = await db.select().from(revisions).where(eq(revisions.id, await submit('LC-001')))
+    const [calc] = await db.select().from(calcs).where(eq(calcs.id, c))
+    const inputs = structuredClone(calc.draftInputs) as { loads: { name: string; fy: number }[] }
+    const load = inputs.loads[0]
+    const was = load.fy
+    load.fy = was * 2
+    expect((await saveInputs(people.engineer, projectId, c, inputs)).ok).toBe(true)
+    const rev = await saveRevision(people.engineer, projectId, c, real, { reason: 'load doubled', confirmFailing: true })
+    await drainRenderJobs(real)
+    const text = pdfText((await revisionPdf(people.checker, projectId, c, rev, 'A4', real)).bytes)
+    expect(text).toContain(`Changes since rev ${previous.label}`)
+    expect(text).toMatch(new RegExp(`Load cases \\(at the tracer\\) · ${load.name}: Fy N ${formatNumber(was)} ${formatNumber(2 * was)}`))
+    expect(text).toMatch(/Step values changed \(\d+\)/)
+    expect(text).toMatch(/The verdict (is unchanged|changed)/)
   }, 240_000)
 })
 

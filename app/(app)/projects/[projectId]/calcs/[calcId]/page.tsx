@@ -127,6 +127,8 @@ export default async function CalcPage({ params, searchParams }: Props) {
               allowed={TRANSITIONS.filter((t) => can(actor, t.permission)).map((t) => t.action)}
               checkers={w.checkers}
               approvers={w.approvers}
+              suggestedChecker={w.suggestedChecker}
+              suggestedApprover={w.suggestedApprover}
               workingFails={w.workingFails}
               revisions={revisions.map((rev) => ({
                 id: rev.id,

@@ -42,6 +42,9 @@ interface RevisionsPanelProps {
   revisions: RevisionRow[]
   checkers: Person[]
   approvers: Person[]
+  /** Preselected: who signed off the calc's last revision, or the only one there is; '' for "any". */
+  suggestedChecker: string
+  suggestedApprover: string
   /** The working result fails a check: submitting asks for confirmation. */
   workingFails: string | null
 }
@@ -90,7 +93,7 @@ function SubmitForm(props: RevisionsPanelProps & { onDone: (message?: string) =>
       <label className="label" htmlFor={`${id}-checker`}>
         Checker
       </label>
-      <select id={`${id}-checker`} name="checkerId" className="field" defaultValue={props.checkers[0]?.id ?? ''} aria-invalid={err.checkerId ? true : undefined}>
+      <select id={`${id}-checker`} name="checkerId" className="field" defaultValue={props.suggestedChecker} aria-invalid={err.checkerId ? true : undefined}>
         {props.checkers.length !== 1 && <option value="">Any checker of the project</option>}
         {props.checkers.map((p) => (
           <option key={p.id} value={p.id}>
@@ -102,7 +105,7 @@ function SubmitForm(props: RevisionsPanelProps & { onDone: (message?: string) =>
       <label className="label" htmlFor={`${id}-approver`}>
         Approver
       </label>
-      <select id={`${id}-approver`} name="approverId" className="field" defaultValue={props.approvers[0]?.id ?? ''} aria-invalid={err.approverId ? true : undefined}>
+      <select id={`${id}-approver`} name="approverId" className="field" defaultValue={props.suggestedApprover} aria-invalid={err.approverId ? true : undefined}>
         {props.approvers.length !== 1 && <option value="">Any approver of the project</option>}
         {props.approvers.map((p) => (
           <option key={p.id} value={p.id}>

@@ -60,9 +60,9 @@ export default async function ComparePage({ params, searchParams }: Props) {
         </p>
       </section>
       <Table
-        title={`Inputs (${diff.inputs.length} changed)`}
-        head={['Input', `Rev ${diff.from.label}`, `Rev ${diff.to.label}`]}
-        rows={diff.inputs.map((c) => [c.path, show(c.from), show(c.to)])}
+        title={`Inputs (${diff.inputRows.length} changed)`}
+        head={['Input', 'Unit', `Rev ${diff.from.label}`, `Rev ${diff.to.label}`]}
+        rows={diff.inputRows.map((c) => [c.input, c.unit || '—', show(c.from ?? undefined), show(c.to ?? undefined)])}
       />
       <Table
         title={`Results (${diff.values.length} changed)`}
