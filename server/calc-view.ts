@@ -1,16 +1,16 @@
-import { eq } from 'drizzle-orm'
+import { and, eq } from 'drizzle-orm'
 import { db } from '@/db'
 import { listMembers, listRevisions } from '@/db/queries'
-import { calcs, type Calc } from '@/db/schema'
-import { calculate, type CalcResult } from '@/lib/calc/run'
+import { calcs, revisions, type Calc } from '@/db/schema'
+import { calculate, parseCalcInput, type CalcResult } from '@/lib/calc/run'
 import { memoryValuesIn } from '@/lib/checks/memory-values'
 import { AppError } from '@/lib/errors'
 import { authoriseCalc, type Caller } from './access'
 import { pendingAttachments } from './attachments'
 import { listMaterials } from './materials'
 import { openRemarks, remarksWithThreads } from './remarks'
-import { draftReportPackage, loadReportPackage } from './report-package'
 import { renderStatus } from './render-jobs'
+import { draftReportPackage, loadReportPackage } from './report-package'
 import { ticksOf } from './ticks'
 
 /** Calcs saved before the working result was stored with the inputs get it on first view, once. */
@@ -28,9 +28,22 @@ function preparingText(job: { state: string; stage: string | null; error: string
   return `Preparing the package… ${job.stage ?? 'waiting for the renderer'}`
 }
 
+/** The package of the revision asked for (`view` as for the page), or null when the working inputs have errors. */
+export async function getCalcPackage(caller: Caller | null, projectId: string, calcId: string, view?: string) {
+  const access = await authoriseCalc(caller, projectId, calcId, 'project.view')
+  const calc = await withWorkingResult(access.calc)
+  if (view && view !== 'working') {
+    const [rev] = await db.select({ id: revisions.id }).from(revisions).where(and(eq(revisions.calcId, calc.id), eq(revisions.id, view)))
+    if (!rev) throw new AppError('not_found', 'No such revision.')
+    return loadReportPackage(rev.id)
+  }
+  const [newest] = view ? [] : await listRevisions(calc.id)
+  return newest ? loadReportPackage(newest.id) : draftReportPackage(access.project, calc)
+}
+
 /**
  * Everything the calc page shows: the calc, its revisions (with what blocks each), the package of
- * the revision asked for (`view` = a revision id, or 'working' for the working inputs; by default
+ * the revision asked for's result (`view` = a revision id, or 'working' for the working inputs; by default
  * the newest revision), its remarks with threads and its ticks, pending appendices, the project's
  * materials and the people who can be named checker and approver.
  */
@@ -40,8 +53,9 @@ export async function getCalcWorkspace(caller: Caller | null, projectId: string,
   const [revisions, members] = await Promise.all([listRevisions(calcId), listMembers(projectId)])
   if (view && view !== 'working' && !revisions.some((r) => r.id === view)) throw new AppError('not_found', 'No such revision.')
   const shown = view === 'working' || revisions.length === 0 ? null : (revisions.find((r) => r.id === view) ?? revisions[0])
-  const [pkg, remarks, ticks, pending, materials, blockers, renders] = await Promise.all([
-    shown ? loadReportPackage(shown.id) : draftReportPackage(access.project, calc),
+  // The result whose steps the page numbers (remarks and ticks refer to them); the package itself is fetched when asked for.
+  const result = shown ? (shown.result as CalcResult) : parseCalcInput(calc.draftInputs).ok ? (calc.draftResult as CalcResult | null) : null
+  const [remarks, ticks, pending, materials, blockers, renders] = await Promise.all([
     shown ? remarksWithThreads(shown.id) : [],
     shown ? ticksOf(shown.id) : [],
     pendingAttachments(caller, projectId, calcId),
@@ -60,7 +74,7 @@ export async function getCalcWorkspace(caller: Caller | null, projectId: string,
     ...access,
     calc,
     shown,
-    pkg,
+    result,
     remarks,
     ticks,
     pending,

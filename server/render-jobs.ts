@@ -4,8 +4,7 @@ import { renderJobs, revisions } from '@/db/schema'
 import { sha256Hex } from '@/lib/calc/hash'
 import { INSTANCE_ID } from './mail/outbox'
 import { bodyKey, type RevisionDeps } from './package-deps'
-import { attachmentBytes } from './attachments'
-import { reportPackageOf } from './report-package'
+import { packageToRender } from './report-package'
 
 /*
  * Saving a revision only writes it; its package is rendered here, off the request path: the body
@@ -41,7 +40,7 @@ async function stage(id: number, text: string) {
 async function runOne(job: { id: number; revisionId: string; attempts: number }, deps: RevisionDeps) {
   const [rev] = await db.select().from(revisions).where(eq(revisions.id, job.revisionId))
   const others = await db.select().from(revisions).where(eq(revisions.calcId, rev.calcId))
-  const pkg = { ...(await reportPackageOf(rev, others)), attachments: await attachmentBytes(rev.id, deps.store) }
+  const pkg = await packageToRender(rev, others, deps.store)
   await stage(job.id, 'rendering the package body')
   const body = await deps.renderer.renderBody(pkg)
   await deps.store.put(bodyKey(rev.id), body)

@@ -9,6 +9,8 @@ import { remarksWithThreads } from './remarks'
 import { stepOutline } from '@/reports/model/outline'
 import type { CalcType, InputRow, Paper, ReportPackage, RevisionChanges, SignOff } from '@/reports/types'
 import { ticksOf } from './ticks'
+import { attachmentBytes } from './attachments'
+import type { FileStore } from '@/lib/storage'
 import { compareInputRows, compareResults } from '@/lib/review/compare'
 import { storedInputRows } from './compare'
 import { TEMPLATE_VERSION } from '@/reports/version'
@@ -149,6 +151,11 @@ export async function reportPackageOf(rev: Revision, others: Revision[], paper: 
     templateVersion: rev.templateVersion ?? TEMPLATE_VERSION,
     signOff,
   }
+}
+
+/** The package to render: as `reportPackageOf`, with the revision's attached documents read from the store. */
+export async function packageToRender(rev: Revision, others: Revision[], store: FileStore, paper: Paper = 'A4', pending?: PendingEvent): Promise<ReportPackage> {
+  return { ...(await reportPackageOf(rev, others, paper, pending)), attachments: await attachmentBytes(rev.id, store) }
 }
 
 /** The package of a stored revision, as it stands. */

@@ -13,13 +13,13 @@ import type { ProjectRole } from '@/lib/review/roles'
 import { STATES, SUBMIT, transitionOf, type TransitionAction, type TransitionSpec } from '@/lib/review/workflow'
 import type { Paper } from '@/reports/types'
 import { authoriseCalc, type Caller } from './access'
-import { attachmentBytes, pendingAttachmentRows } from './attachments'
+import { pendingAttachmentRows } from './attachments'
 import { bodyKey, type RevisionDeps } from './package-deps'
 import { enqueueRender, kickRenderRunner } from './render-jobs'
 import { verifyPassword } from './auth/password'
 import { notify } from './notices'
 import { carryOverRemarks, openRemarks } from './remarks'
-import { reportPackageOf, TEMPLATE_VERSION, type PendingEvent } from './report-package'
+import { packageToRender, TEMPLATE_VERSION, type PendingEvent } from './report-package'
 import { signStatement, verificationCodeOf } from './signing'
 
 export type { ReportRenderer, RevisionDeps } from './package-deps'
@@ -48,10 +48,9 @@ async function storePdf(bytes: Uint8Array, deps: RevisionDeps) {
 
 /** The package of `rev` as it will stand (with `pending`, an event about to be written), stamped onto its stored body. */
 async function stamp(rev: Revision, others: Revision[], deps: RevisionDeps, pending?: PendingEvent, paper: Paper = 'A4') {
-  const pkg = await reportPackageOf(rev, others, paper, pending)
-  const full = { ...pkg, attachments: await attachmentBytes(rev.id, deps.store) }
-  const body = paper === 'A4' ? await deps.store.get(bodyKey(rev.id)) : await deps.renderer.renderBody(full)
-  return deps.renderer.finishPdf(body, full)
+  const pkg = await packageToRender(rev, others, deps.store, paper, pending)
+  const body = paper === 'A4' ? await deps.store.get(bodyKey(rev.id)) : await deps.renderer.renderBody(pkg)
+  return deps.renderer.finishPdf(body, pkg)
 }
 
 const superseding = (all: Revision[], states: readonly string[], except: string) =>

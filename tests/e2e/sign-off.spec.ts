@@ -1,3 +1,4 @@
+import { execFileSync } from 'node:child_process'
 import { readFileSync, writeFileSync } from 'node:fs'
 import { expect, test, type Page } from '@playwright/test'
 import { DEMO_PASSWORD } from '../../server/demo/demo-data'
@@ -156,6 +157,11 @@ test('a second revision goes through and supersedes the first', async ({ page })
   await transition(page, 'Issue', { password: true, materials: true })
   await expect(page.getByTestId('revisions').getByTestId('revision-B')).toContainText('Issued')
   await expect(page.getByTestId('revisions').getByTestId('revision-A')).toContainText('Superseded')
+  // The new revision's package says what changed since the one it supersedes.
+  const href = (await page.getByTestId('revisions').getByTestId('revision-B').getByRole('link', { name: 'PDF (A4)' }).getAttribute('href'))!
+  const text = execFileSync('pdftotext', ['-layout', '-', '-'], { input: await (await page.request.get(href)).body() }).toString('utf8')
+  expect(text).toContain('Changes since rev A')
+  expect(text).toMatch(/The verdict (is unchanged|changed)/)
   await page.getByRole('link', { name: 'Compare revisions' }).click()
   await expect(page.getByRole('heading', { level: 1 })).toContainText('Changes from rev A to rev B')
 })

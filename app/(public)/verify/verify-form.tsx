@@ -1,82 +1,81 @@
 'use client'
 
-import { useState, useTransition } from 'react'
+import { useState, useTransition, type FormEvent, type InputHTMLAttributes } from 'react'
+import type { Verification } from '@/server/verify'
 
-interface Verdict {
-  issued: boolean
-  signatureValid: boolean
-  superseded: boolean
-  voided: boolean
-  project: string | null
-  calc: string | null
-  revision: string | null
-  issuedAt: string | null
-  message: string
+type Field = 'file' | 'code'
+
+/** One way in (a file or a code): its label, its input, its message at the field and its button. */
+function VerifyBy(props: { field: Field; label: string; button: string; pending: boolean; error: string; onSubmit: (form: HTMLFormElement) => void; input: InputHTMLAttributes<HTMLInputElement> }) {
+  const id = `verify-${props.field}`
+  const submit = (e: FormEvent<HTMLFormElement>) => {
+    e.preventDefault()
+    props.onSubmit(e.currentTarget)
+  }
+  return (
+    <form className="panel flex flex-col gap-2 p-4" onSubmit={submit}>
+      <label htmlFor={id} className="label">
+        {props.label}
+      </label>
+      <input id={id} name={props.field} aria-describedby={`${id}-error`} {...props.input} className={`field ${props.input.className ?? ''}`} />
+      <p id={`${id}-error`} className="field-error" aria-live="polite">
+        {props.error}
+      </p>
+      <div>
+        <button className="btn" disabled={props.pending}>
+          {props.pending ? 'Checking…' : props.button}
+        </button>
+      </div>
+    </form>
+  )
 }
 
 /** Calls the public API (POST /api/v1/verify) with a file or a code and shows the verdict in plain words. */
 export function VerifyForm() {
-  const [verdict, setVerdict] = useState<Verdict | null>(null)
-  const [error, setError] = useState<{ field: 'file' | 'code'; message: string } | null>(null)
+  const [verdict, setVerdict] = useState<Verification | null>(null)
+  const [error, setError] = useState<{ field: Field; message: string } | null>(null)
   const [pending, start] = useTransition()
 
-  const send = (field: 'file' | 'code', init: RequestInit) =>
+  const send = (field: Field, init: RequestInit) =>
     start(async () => {
       setVerdict(null)
       setError(null)
       const res = await fetch('/api/v1/verify', { method: 'POST', ...init })
       const body = await res.json().catch(() => null)
       if (!res.ok) setError({ field, message: body?.error?.fields?.[field] ?? body?.error?.message ?? `The server answered ${res.status}.` })
-      else setVerdict(body as Verdict)
+      else setVerdict(body as Verification)
     })
+  const errorAt = (field: Field) => (error?.field === field ? error.message : '')
 
   const good = verdict?.issued && verdict.signatureValid && !verdict.superseded && !verdict.voided
   return (
     <div className="flex flex-col gap-4">
-      <form
-        className="panel flex flex-col gap-2 p-4"
-        onSubmit={(e) => {
-          e.preventDefault()
-          const fd = new FormData(e.currentTarget)
+      <VerifyBy
+        field="file"
+        label="The PDF package"
+        button="Verify the file"
+        pending={pending}
+        error={errorAt('file')}
+        input={{ type: 'file', accept: 'application/pdf' }}
+        onSubmit={(form) => {
+          const fd = new FormData(form)
           const file = fd.get('file')
           if (!(file instanceof File) || file.size === 0) return setError({ field: 'file', message: 'Choose the PDF to verify.' })
           send('file', { body: fd })
         }}
-      >
-        <label htmlFor="verify-file" className="label">
-          The PDF package
-        </label>
-        <input id="verify-file" name="file" type="file" accept="application/pdf" className="field" aria-describedby="verify-file-error" />
-        <p id="verify-file-error" className="field-error" aria-live="polite">
-          {error?.field === 'file' ? error.message : ''}
-        </p>
-        <div>
-          <button className="btn" disabled={pending}>
-            {pending ? 'Checking…' : 'Verify the file'}
-          </button>
-        </div>
-      </form>
-      <form
-        className="panel flex flex-col gap-2 p-4"
-        onSubmit={(e) => {
-          e.preventDefault()
-          const code = String(new FormData(e.currentTarget).get('code') ?? '')
+      />
+      <VerifyBy
+        field="code"
+        label="Or the verification code"
+        button="Verify the code"
+        pending={pending}
+        error={errorAt('code')}
+        input={{ className: 'font-mono uppercase', placeholder: '7K2QD-M9XWA', autoComplete: 'off' }}
+        onSubmit={(form) => {
+          const code = String(new FormData(form).get('code') ?? '')
           send('code', { headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ code }) })
         }}
-      >
-        <label htmlFor="verify-code" className="label">
-          Or the verification code
-        </label>
-        <input id="verify-code" name="code" className="field font-mono uppercase" placeholder="7K2QD-M9XWA" autoComplete="off" aria-describedby="verify-code-error" />
-        <p id="verify-code-error" className="field-error" aria-live="polite">
-          {error?.field === 'code' ? error.message : ''}
-        </p>
-        <div>
-          <button className="btn" disabled={pending}>
-            {pending ? 'Checking…' : 'Verify the code'}
-          </button>
-        </div>
-      </form>
+      />
       {verdict && (
         <section role="status" className={`rounded border p-4 ${good ? 'border-pass bg-white' : 'border-fail bg-fail-soft'}`} data-testid="verdict">
           <p className={`text-base font-semibold ${good ? 'text-pass' : 'text-fail'}`}>{verdict.message}</p>

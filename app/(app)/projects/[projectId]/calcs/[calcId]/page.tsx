@@ -6,6 +6,7 @@ import '@/reports/web/report.css'
 import { StateBadge } from '@/app/_components/state-badge'
 import { loadProjectContext } from '@/app/_lib/project-context'
 import { reports } from '@/app/_lib/renderer'
+import type { CalcType } from '@/reports/types'
 import { defaultCalcInputs } from '@/lib/calc/defaults'
 import type { CalcResult } from '@/lib/calc/run'
 import { MATERIALS } from '@/lib/checks'
@@ -50,8 +51,8 @@ export default async function CalcPage({ params, searchParams }: Props) {
   const [{ projectId, calcId }, { view }] = await Promise.all([params, searchParams])
   const { user, project, actor } = await loadProjectContext(projectId)
   const w = await orNotFound(getCalcWorkspace(user, projectId, calcId, view))
-  const { calc, revisions, shown, pkg } = w
-  const outline = pkg ? (await reports()).stepOutline(pkg) : []
+  const { calc, revisions, shown, result } = w
+  const outline = result ? (await reports()).stepOutline({ calc: { type: calc.calcType as CalcType }, result }) : []
   const byId = new Map(outline.map((s) => [s.id, s]))
   const base = `/projects/${projectId}/calcs/${calcId}`
   const iso = (d: Date) => d.toISOString()
@@ -177,7 +178,7 @@ export default async function CalcPage({ params, searchParams }: Props) {
                 ))}
               </nav>
             </div>
-            {pkg ? (
+            {result ? (
               <PackageLoader
                 key={shown?.id ?? 'working'}
                 view={shown?.id ?? 'working'}

@@ -1,7 +1,7 @@
 'use client'
 
 import { useRouter } from 'next/navigation'
-import { useEffect, useId, useRef, useState, useTransition } from 'react'
+import { useEffect, useId, useState, useTransition, type FormEvent, type ReactNode } from 'react'
 import { FieldError, FormMessage } from '@/app/_components/form'
 import { StateBadge } from '@/app/_components/state-badge'
 import type { ActionState } from '@/app/_lib/action'
@@ -49,82 +49,38 @@ interface RevisionsPanelProps {
   workingFails: string | null
 }
 
-function useRun() {
+/** The shell both confirmations share: runs the action, shows its message, closes and refreshes on success. */
+function ConfirmForm(props: {
+  label: string
+  button: string
+  busy: string
+  disabled?: boolean
+  action: (fd: FormData) => Promise<ActionState>
+  onDone: (message?: string) => void
+  children: (fieldErrors: Record<string, string>) => ReactNode
+}) {
   const router = useRouter()
   const [state, setState] = useState<ActionState>({})
   const [pending, start] = useTransition()
-  const run = (fn: () => Promise<ActionState>, after?: (message?: string) => void) =>
+  const submit = (e: FormEvent<HTMLFormElement>) => {
+    e.preventDefault()
+    const fd = new FormData(e.currentTarget)
     start(async () => {
-      const result = await fn()
+      const result = await props.action(fd)
       setState(result)
       if (result.ok) {
-        after?.(result.message)
+        props.onDone(result.message)
         router.refresh()
       }
     })
-  return { state, pending, run }
-}
-
-/** Submitting the working inputs: reason, the checker and approver named, a failing calc confirmed. */
-function SubmitForm(props: RevisionsPanelProps & { onDone: (message?: string) => void }) {
-  const { state, pending, run } = useRun()
-  const id = useId()
-  const [confirm, setConfirm] = useState(false)
-  const form = useRef<HTMLFormElement>(null)
-  const submit = (e: React.FormEvent) => {
-    e.preventDefault()
-    const fd = new FormData(form.current!)
-    const opts = {
-      reason: String(fd.get('reason') ?? ''),
-      checkerId: String(fd.get('checkerId') ?? '') || undefined,
-      approverId: String(fd.get('approverId') ?? '') || undefined,
-      confirmFailing: confirm,
-    }
-    run(() => saveRevisionAction(props.projectId, props.calcId, opts), props.onDone)
   }
-  const err = state.fieldErrors ?? {}
   return (
-    <form ref={form} onSubmit={submit} className="flex flex-col gap-2 rounded border border-accent/40 bg-accent-soft/40 p-3" aria-label="Save a revision for check">
+    <form onSubmit={submit} className="flex flex-col gap-2 rounded border border-accent/40 bg-accent-soft/40 p-3" aria-label={props.label}>
+      {props.children(state.fieldErrors ?? {})}
       <FormMessage state={state} />
-      <label className="label" htmlFor={`${id}-reason`}>
-        Why this revision (shown in the history)
-      </label>
-      <input id={`${id}-reason`} name="reason" className="field" required maxLength={500} placeholder="e.g. stroke raised to 140 mm for the CE-40 B model" />
-      <label className="label" htmlFor={`${id}-checker`}>
-        Checker
-      </label>
-      <select id={`${id}-checker`} name="checkerId" className="field" defaultValue={props.suggestedChecker} aria-invalid={err.checkerId ? true : undefined}>
-        {props.checkers.length !== 1 && <option value="">Any checker of the project</option>}
-        {props.checkers.map((p) => (
-          <option key={p.id} value={p.id}>
-            {p.name}
-          </option>
-        ))}
-      </select>
-      <FieldError message={err.checkerId} />
-      <label className="label" htmlFor={`${id}-approver`}>
-        Approver
-      </label>
-      <select id={`${id}-approver`} name="approverId" className="field" defaultValue={props.suggestedApprover} aria-invalid={err.approverId ? true : undefined}>
-        {props.approvers.length !== 1 && <option value="">Any approver of the project</option>}
-        {props.approvers.map((p) => (
-          <option key={p.id} value={p.id}>
-            {p.name}
-          </option>
-        ))}
-      </select>
-      <FieldError message={err.approverId} />
-      {props.workingFails && (
-        <label className="flex items-start gap-2 rounded bg-fail-soft p-2 text-sm text-fail">
-          <input type="checkbox" checked={confirm} onChange={(e) => setConfirm(e.target.checked)} className="mt-1" />
-          <span>
-            The calc fails: {props.workingFails}. Submit it anyway; the revision will record that it was submitted failing.
-          </span>
-        </label>
-      )}
       <div className="flex gap-2">
-        <button type="submit" className="btn" disabled={pending || (!!props.workingFails && !confirm)}>
-          {pending ? 'Running the calc and writing the package…' : 'Save revision and send to check'}
+        <button type="submit" className="btn" disabled={pending || props.disabled}>
+          {pending ? props.busy : props.button}
         </button>
         <button type="button" className="btn-quiet" onClick={() => props.onDone()}>
           Cancel
@@ -134,84 +90,134 @@ function SubmitForm(props: RevisionsPanelProps & { onDone: (message?: string) =>
   )
 }
 
-/** A transition, confirmed: what will be signed, the password, the reason, the material values to confirm. */
-function TransitionForm({ t, rev, props, onDone }: { t: TransitionSpec; rev: RevisionRow; props: RevisionsPanelProps; onDone: (message?: string) => void }) {
-  const { state, pending, run } = useRun()
+const text = (fd: FormData, name: string) => String(fd.get(name) ?? '')
+
+/** Submitting the working inputs: reason, the checker and approver named, a failing calc confirmed. */
+function SubmitForm(props: RevisionsPanelProps & { onDone: (message?: string) => void }) {
   const id = useId()
-  const [materials, setMaterials] = useState(false)
-  const form = useRef<HTMLFormElement>(null)
-  const needsMaterials = t.to === 'issued' && rev.memoryValues.length > 0
-  const blocked = t.blockedBy === 'must-resolve' ? rev.openRemarks.mustResolve : t.blockedBy === 'any' ? rev.openRemarks.any : 0
-  const submit = (e: React.FormEvent) => {
-    e.preventDefault()
-    const fd = new FormData(form.current!)
-    const opts = {
-      password: t.password ? String(fd.get('password') ?? '') : undefined,
-      reason: t.reason ? String(fd.get('reason') ?? '') : undefined,
-      confirmMaterials: needsMaterials && materials ? (true as const) : undefined,
-    }
-    run(() => transitionAction(props.projectId, props.calcId, rev.id, t.action, opts), onDone)
-  }
-  const err = state.fieldErrors ?? {}
+  const [confirm, setConfirm] = useState(false)
+  const action = (fd: FormData) =>
+    saveRevisionAction(props.projectId, props.calcId, {
+      reason: text(fd, 'reason'),
+      checkerId: text(fd, 'checkerId') || undefined,
+      approverId: text(fd, 'approverId') || undefined,
+      confirmFailing: confirm,
+    })
   return (
-    <form ref={form} onSubmit={submit} className="flex flex-col gap-2 rounded border border-accent/40 bg-accent-soft/40 p-3" aria-label={t.button}>
-      <p className="text-sm font-semibold">{t.confirm}</p>
-      <dl className="grid grid-cols-[7rem_1fr] gap-x-2 text-xs">
-        <dt className="text-ink/70">Calc</dt>
-        <dd>
-          {props.calcNumber} rev {rev.label}
-        </dd>
-        <dt className="text-ink/70">Content SHA-256</dt>
-        <dd className="font-mono break-all">{rev.contentHash}</dd>
-      </dl>
-      {blocked > 0 && (
-        <p role="alert" className="rounded bg-fail-soft p-2 text-sm text-fail">
-          {blocked} {t.blockedBy === 'must-resolve' ? 'remark(s) that must be resolved' : 'remark(s)'} still open: close them first.
-        </p>
-      )}
-      {t.reason && (
+    <ConfirmForm
+      label="Save a revision for check"
+      button="Save revision and send to check"
+      busy="Running the calc and writing the package…"
+      disabled={!!props.workingFails && !confirm}
+      action={action}
+      onDone={props.onDone}
+    >
+      {(err) => (
         <>
           <label className="label" htmlFor={`${id}-reason`}>
-            Reason
+            Why this revision (shown in the history)
           </label>
-          <textarea id={`${id}-reason`} name="reason" rows={2} className="field" aria-invalid={err.reason ? true : undefined} />
+          <input id={`${id}-reason`} name="reason" className="field" required maxLength={500} placeholder="e.g. stroke raised to 140 mm for the CE-40 B model" />
           <FieldError message={err.reason} />
+          <PersonSelect id={`${id}-checker`} name="checkerId" label="Checker" people={props.checkers} suggested={props.suggestedChecker} anyLabel="Any checker of the project" error={err.checkerId} />
+          <PersonSelect id={`${id}-approver`} name="approverId" label="Approver" people={props.approvers} suggested={props.suggestedApprover} anyLabel="Any approver of the project" error={err.approverId} />
+          {props.workingFails && (
+            <label className="flex items-start gap-2 rounded bg-fail-soft p-2 text-sm text-fail">
+              <input type="checkbox" checked={confirm} onChange={(e) => setConfirm(e.target.checked)} className="mt-1" />
+              <span>The calc fails: {props.workingFails}. Submit it anyway; the revision will record that it was submitted failing.</span>
+            </label>
+          )}
         </>
       )}
-      {needsMaterials && (
-        <fieldset className="rounded border border-caution bg-caution-soft p-2 text-xs">
-          <legend className="px-1 font-semibold">Material values marked “from memory”</legend>
-          <ul className="list-disc pl-4">
-            {rev.memoryValues.map((m) => (
-              <li key={m.key}>
-                <span className="font-mono">{m.key}</span>: {m.source}
-              </li>
-            ))}
-          </ul>
-          <label className="mt-1 flex items-start gap-2">
-            <input type="checkbox" checked={materials} onChange={(e) => setMaterials(e.target.checked)} className="mt-0.5" />I checked each value against its standard (recorded with my name).
-          </label>
-        </fieldset>
-      )}
-      {t.password && (
+    </ConfirmForm>
+  )
+}
+
+function PersonSelect(p: { id: string; name: string; label: string; people: Person[]; suggested: string; anyLabel: string; error?: string }) {
+  return (
+    <>
+      <label className="label" htmlFor={p.id}>
+        {p.label}
+      </label>
+      <select id={p.id} name={p.name} className="field" defaultValue={p.suggested} aria-invalid={p.error ? true : undefined}>
+        {p.people.length !== 1 && <option value="">{p.anyLabel}</option>}
+        {p.people.map((x) => (
+          <option key={x.id} value={x.id}>
+            {x.name}
+          </option>
+        ))}
+      </select>
+      <FieldError message={p.error} />
+    </>
+  )
+}
+
+/** A transition, confirmed: what will be signed, the password, the reason, the material values to confirm. */
+function TransitionForm({ t, rev, props, onDone }: { t: TransitionSpec; rev: RevisionRow; props: RevisionsPanelProps; onDone: (message?: string) => void }) {
+  const id = useId()
+  const [materials, setMaterials] = useState(false)
+  const needsMaterials = t.to === 'issued' && rev.memoryValues.length > 0
+  const blocked = t.blockedBy === 'must-resolve' ? rev.openRemarks.mustResolve : t.blockedBy === 'any' ? rev.openRemarks.any : 0
+  const action = (fd: FormData) =>
+    transitionAction(props.projectId, props.calcId, rev.id, t.action, {
+      password: t.password ? text(fd, 'password') : undefined,
+      reason: t.reason ? text(fd, 'reason') : undefined,
+      confirmMaterials: needsMaterials && materials ? (true as const) : undefined,
+    })
+  return (
+    <ConfirmForm label={t.button} button={t.button} busy="Signing…" disabled={blocked > 0 || (needsMaterials && !materials)} action={action} onDone={onDone}>
+      {(err) => (
         <>
-          <label className="label" htmlFor={`${id}-password`}>
-            Your password (to sign)
-          </label>
-          <input id={`${id}-password`} name="password" type="password" autoComplete="current-password" className="field" aria-invalid={err.password ? true : undefined} />
-          <FieldError message={err.password} />
+          <p className="text-sm font-semibold">{t.confirm}</p>
+          <dl className="grid grid-cols-[7rem_1fr] gap-x-2 text-xs">
+            <dt className="text-ink/70">Calc</dt>
+            <dd>
+              {props.calcNumber} rev {rev.label}
+            </dd>
+            <dt className="text-ink/70">Content SHA-256</dt>
+            <dd className="font-mono break-all">{rev.contentHash}</dd>
+          </dl>
+          {blocked > 0 && (
+            <p role="alert" className="rounded bg-fail-soft p-2 text-sm text-fail">
+              {blocked} {t.blockedBy === 'must-resolve' ? 'remark(s) that must be resolved' : 'remark(s)'} still open: close them first.
+            </p>
+          )}
+          {t.reason && (
+            <>
+              <label className="label" htmlFor={`${id}-reason`}>
+                Reason
+              </label>
+              <textarea id={`${id}-reason`} name="reason" rows={2} className="field" aria-invalid={err.reason ? true : undefined} />
+              <FieldError message={err.reason} />
+            </>
+          )}
+          {needsMaterials && (
+            <fieldset className="rounded border border-caution bg-caution-soft p-2 text-xs">
+              <legend className="px-1 font-semibold">Material values marked “from memory”</legend>
+              <ul className="list-disc pl-4">
+                {rev.memoryValues.map((m) => (
+                  <li key={m.key}>
+                    <span className="font-mono">{m.key}</span>: {m.source}
+                  </li>
+                ))}
+              </ul>
+              <label className="mt-1 flex items-start gap-2">
+                <input type="checkbox" checked={materials} onChange={(e) => setMaterials(e.target.checked)} className="mt-0.5" />I checked each value against its standard (recorded with my name).
+              </label>
+            </fieldset>
+          )}
+          {t.password && (
+            <>
+              <label className="label" htmlFor={`${id}-password`}>
+                Your password (to sign)
+              </label>
+              <input id={`${id}-password`} name="password" type="password" autoComplete="current-password" className="field" aria-invalid={err.password ? true : undefined} />
+              <FieldError message={err.password} />
+            </>
+          )}
         </>
       )}
-      <FormMessage state={state} />
-      <div className="flex gap-2">
-        <button type="submit" className="btn" disabled={pending || blocked > 0 || (needsMaterials && !materials)}>
-          {pending ? 'Signing…' : t.button}
-        </button>
-        <button type="button" className="btn-quiet" onClick={() => onDone()}>
-          Cancel
-        </button>
-      </div>
-    </form>
+    </ConfirmForm>
   )
 }
 

@@ -1,7 +1,7 @@
 import { apiRoute } from '@/app/_lib/api'
 import { reports } from '@/app/_lib/renderer'
 import { AppError } from '@/lib/errors'
-import { getCalcWorkspace } from '@/server/calc-view'
+import { getCalcPackage } from '@/server/calc-view'
 
 type P = { projectId: string; calcId: string }
 
@@ -11,8 +11,8 @@ type P = { projectId: string; calcId: string }
  */
 export const GET = apiRoute<P>(async ({ req, caller, params }) => {
   const view = new URL(req.url).searchParams.get('view') ?? undefined
-  const w = await getCalcWorkspace(caller, params.projectId, params.calcId, view)
-  if (!w.pkg) throw new AppError('invalid', 'The working inputs have errors; fix them in the form to see the package.')
-  const html = await (await reports()).renderWebHtml(w.pkg)
+  const pkg = await getCalcPackage(caller, params.projectId, params.calcId, view)
+  if (!pkg) throw new AppError('invalid', 'The working inputs have errors; fix them in the form to see the package.')
+  const html = await (await reports()).renderWebHtml(pkg)
   return new Response(html, { headers: { 'Content-Type': 'text/html; charset=utf-8', 'Cache-Control': 'private, no-store' } })
 })
