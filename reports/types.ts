@@ -109,6 +109,8 @@ export interface ReportPackage {
   templateVersion: string
   /** Present once the revision has been submitted: the record of its sign-off. */
   signOff?: SignOff
+  /** Units the values print in; the working stays in SI. Absent: SI. */
+  units?: 'SI' | 'US'
   /** What changed since the calc's revision before this one; absent for the first. */
   changes?: RevisionChanges
 }

@@ -37,6 +37,8 @@ async function main() {
     [`demo-${first.number}-letter`, demoPackage(first, { paper: 'LETTER' })],
     [`demo-${first.number}-draft`, demoPackage(first, { state: 'draft' })],
     [`demo-${first.number}-in-check-attachment`, withAttachment],
+    // The AISC calc as an engineer working in US customary units gets it.
+    [`demo-${DEMO_CALCS[1].number}-us`, { ...demoPackage(DEMO_CALCS[1]), units: 'US' }],
   ]
   for (const [name, pkg] of jobs) {
     const t0 = performance.now()

@@ -41,6 +41,11 @@ function changesSince(earlier: Revision | undefined, rows: InputRow[], result: C
   return { since: earlier.label, inputs: compareInputRows(storedInputRows(earlier.inputs), rows), ...compareResults(earlier.result as CalcResult, result) }
 }
 
+/** The units a package prints in: US customary when the engineer works in them (the bench's choice or the checks' input units). */
+function unitsOf(inputs: unknown, result: CalcResult): 'SI' | 'US' {
+  return (inputs as { displayUnits?: unknown } | null)?.displayUnits === 'US' || result.units === 'US' ? 'US' : 'SI'
+}
+
 function common(project: Project, calc: Calc, paper: Paper) {
   return {
     paper,
@@ -145,6 +150,7 @@ export async function reportPackageOf(rev: Revision, others: Revision[], paper: 
     inputRows,
     result: rev.result as CalcResult,
     changes: changesSince(all[all.indexOf(rev) - 1], inputRows, rev.result as CalcResult),
+    units: unitsOf(rev.inputs, rev.result as CalcResult),
     // Fixed at submission: the body is rendered once and every stamp keeps its dates.
     generatedAt: rev.createdAt.toISOString(),
     engineVersion: rev.engineVersion,
@@ -181,6 +187,7 @@ export async function draftReportPackage(project: Project, calc: Calc): Promise<
     inputRows,
     result: calc.draftResult as CalcResult,
     changes: changesSince(all.at(-1), inputRows, calc.draftResult as CalcResult),
+    units: unitsOf(calc.draftInputs, calc.draftResult as CalcResult),
     generatedAt: calc.updatedAt.toISOString(),
     engineVersion: ENGINE_VERSION,
     templateVersion: TEMPLATE_VERSION,

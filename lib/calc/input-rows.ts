@@ -1,4 +1,5 @@
 import { getMechanism } from '@/lib/mechanisms'
+import { displayUnit, kindOfSILabel, type UnitSystem } from '@/lib/units/system'
 import type { CalcInput } from './run'
 import { DEFAULT_MIN_TRANSMISSION_DEG, DEFAULT_STRAIGHTNESS_TOLERANCE } from './mechanism'
 
@@ -72,13 +73,16 @@ const VALUE_LABELS: Record<string, string> = {
 }
 
 /** Flattens a nested description (pin/link defaults, basis) into labelled rows. */
-function flatten(group: string, prefix: string, value: unknown, out: InputRow[]) {
+function flatten(group: string, prefix: string, value: unknown, out: InputRow[], system: UnitSystem = 'SI') {
   if (value === undefined || value === null) return
   if (typeof value === 'object' && !Array.isArray(value)) {
-    for (const [k, v] of Object.entries(value)) flatten(group, prefix ? `${prefix}.${k}` : k, v, out)
+    for (const [k, v] of Object.entries(value)) flatten(group, prefix ? `${prefix}.${k}` : k, v, out, system)
     return
   }
-  const [label, unit] = KEY_LABELS[prefix] ?? [prefix, '']
+  const [label, siUnit] = KEY_LABELS[prefix] ?? [prefix, '']
+  // Check inputs given in US customary units are printed as given, with their own units.
+  const kind = system === 'US' ? kindOfSILabel(siUnit) : null
+  const unit = kind ? displayUnit('US', kind) : siUnit
   const shown = typeof value === 'boolean' ? (value ? 'yes' : 'no') : typeof value === 'string' ? (VALUE_LABELS[value] ?? value) : (value as number)
   out.push({ group, label, value: shown, unit })
 }
@@ -119,14 +123,15 @@ export function inputRowsOf(input: CalcInput): InputRow[] {
   if (m.selfWeight) flatten('Self-weight of links', '', m.selfWeight, rows)
   const c = input.checks
   if (c) {
-    flatten('Design basis', '', c.basis, rows)
+    const sys = c.units
+    flatten('Design basis', '', c.basis, rows, sys)
     rows.push({ group: 'Design basis', label: 'Load factor', value: c.factors.load, unit: '—' })
     rows.push({ group: 'Design basis', label: 'Dynamic factor', value: c.factors.dynamic, unit: '—' })
-    flatten('Pins (all joints unless listed)', '', c.defaults.joint, rows)
-    flatten('Links (all links unless listed)', '', c.defaults.link, rows)
-    for (const [name, j] of Object.entries(c.joints)) flatten(`Joint ${name}`, '', j, rows)
-    for (const [name, l] of Object.entries(c.links)) flatten(`Link ${name}`, '', l, rows)
-    for (const [name, mat] of Object.entries(c.materials)) flatten(`Material ${name}`, '', mat, rows)
+    flatten('Pins (all joints unless listed)', '', c.defaults.joint, rows, sys)
+    flatten('Links (all links unless listed)', '', c.defaults.link, rows, sys)
+    for (const [name, j] of Object.entries(c.joints)) flatten(`Joint ${name}`, '', j, rows, sys)
+    for (const [name, l] of Object.entries(c.links)) flatten(`Link ${name}`, '', l, rows, sys)
+    for (const [name, mat] of Object.entries(c.materials)) flatten(`Material ${name}`, '', mat, rows, sys)
   }
   return rows
 }

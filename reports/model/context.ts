@@ -3,6 +3,7 @@
  * step numbers (identical in the web view and the PDF because both read them
  * from here), section order and the template's front matter.
  */
+import type { UnitSystem } from '../../lib/units/system'
 import type { Step } from '../../lib/contract'
 import type { ReportPackage } from '../types'
 import { canonicalJson, sha256Hex } from '../hash'
@@ -43,6 +44,8 @@ export interface ReportContext {
   /** SHA-256 of the canonical result JSON, printed on the cover. */
   resultHash: string
   numbering: Numbering
+  /** The units values print in: SI, or US customary (the working stays in SI). */
+  units: UnitSystem
 }
 
 export function readMeta(frontmatter: Record<string, unknown>): TemplateMeta {
@@ -77,7 +80,7 @@ export function buildContext(
   }
   const declared = stepSectionsOf(pkg.calc.type)
   const otherSections = [...bySection.keys()].filter((s) => !declared.includes(s))
-  return { pkg, meta, bySection, appendixBySection, otherSections, numberOf, figureWidth: extra.figureWidth, appendixPages: extra.appendixPages ?? [], resultHash: sha256Hex(canonicalJson(pkg.result)), numbering: numberOutline(outline, pkg.result) }
+  return { pkg, meta, bySection, appendixBySection, otherSections, numberOf, figureWidth: extra.figureWidth, appendixPages: extra.appendixPages ?? [], resultHash: sha256Hex(canonicalJson(pkg.result)), numbering: numberOutline(outline, pkg.result), units: pkg.units ?? 'SI' }
 }
 
 /** Step anchors are shared by the web view, the PDF links and checker remarks. */

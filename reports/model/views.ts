@@ -7,7 +7,8 @@ import { mechanismLabel } from '../../lib/mechanisms'
 import type { CheckItem, LoadCaseEnvelope, PositionResult, Step, Table } from '../../lib/contract'
 import type { ReportPackage } from '../types'
 import type { ReportContext } from './context'
-import { STATE_LABEL, VERDICT_LABEL, formatDate, formatNumber, formatUtilisation, formatValue } from './format'
+import { STATE_LABEL, VERDICT_LABEL, columnUnit, formatDate, formatNumber, formatResult, formatUtilisation, formatValue } from './format'
+import type { UnitSystem } from '../../lib/units/system'
 
 export interface StepView {
   n: number
@@ -29,7 +30,8 @@ export interface StepView {
   note?: string
 }
 
-export function stepView(n: number, step: Step, numberOf?: Map<string, number>): StepView {
+export function stepView(n: number, step: Step, ctx?: Pick<ReportContext, 'numberOf' | 'units'>): StepView {
+  const numberOf = ctx?.numberOf
   const isCheck = step.id.startsWith('chk.') && step.unit === '—' && typeof step.value === 'number'
   const from = step.refs?.length
     ? step.refs.map((r) => `${r.what}, step ${numberOf?.get(r.stepId) ?? r.stepId}`).join('; ')
@@ -40,7 +42,7 @@ export function stepView(n: number, step: Step, numberOf?: Map<string, number>):
     title: step.title,
     formula: step.formula,
     substituted: step.substituted,
-    result: isCheck ? formatUtilisation(step.value as number) : formatValue(step.value, step.unit),
+    result: isCheck ? formatUtilisation(step.value as number) : formatResult(step.value, step.unit, ctx?.units),
     utilisation: isCheck ? (step.value as number) : undefined,
     criterion: step.criterion,
     source: step.source,
@@ -62,18 +64,19 @@ export interface TableView {
   strong?: boolean[]
 }
 
-export function tableView(table: Table): TableView {
+export function tableView(table: Table, system: UnitSystem = 'SI'): TableView {
   const numeric = table.columns.map((c) => table.rows.some((r) => typeof r[c.key] === 'number'))
+  const units = table.columns.map((c) => columnUnit(c.unit, system))
   return {
     id: table.id,
     title: table.title,
-    headers: table.columns.map((c) => (c.unit ? `${c.label} [${c.unit}]` : c.label)),
+    headers: table.columns.map((c, i) => (units[i].unit ? `${c.label} [${units[i].unit}]` : c.label)),
     numeric,
     rows: table.rows.map((row) =>
-      table.columns.map((c) => {
+      table.columns.map((c, i) => {
         const v = row[c.key]
         if (v === null || v === undefined) return '—'
-        if (typeof v === 'number') return formatNumber(v)
+        if (typeof v === 'number') return formatNumber(units[i].show(v))
         if (typeof v === 'boolean') return v ? 'yes' : 'no'
         return v
       }),
@@ -90,7 +93,7 @@ export function componentTable(checks: CheckItem[], ctx: ReportContext): TableVi
     const own = checks.filter((c) => c.component === name && c.kind !== 'detailing')
     const g = own.find((c) => c.governing) ?? own[0]
     if (!g) return [name, '—', '—', '—', '—', '—', '—']
-    return [name, g.check, formatValue(g.demand, g.unit), formatValue(g.capacity, g.unit), formatUtilisation(g.utilisation), g.pass ? '' : 'fails', stepRef(ctx, g.stepId)]
+    return [name, g.check, formatValue(g.demand, g.unit, ctx.units), formatValue(g.capacity, g.unit, ctx.units), formatUtilisation(g.utilisation), g.pass ? '' : 'fails', stepRef(ctx, g.stepId)]
   })
   return {
     id: 'components',
@@ -110,7 +113,7 @@ export function detailingTable(checks: CheckItem[], ctx: ReportContext): TableVi
     title: 'Detailing rules',
     headers: ['component', 'rule', 'required', 'provided', '', 'step'],
     numeric: [false, false, true, true, false, true],
-    rows: rules.map((c) => [c.component, c.check, formatValue(c.demand, c.unit), formatValue(c.capacity, c.unit), c.pass ? 'met' : 'not met', stepRef(ctx, c.stepId)]),
+    rows: rules.map((c) => [c.component, c.check, formatValue(c.demand, c.unit, ctx.units), formatValue(c.capacity, c.unit, ctx.units), c.pass ? 'met' : 'not met', stepRef(ctx, c.stepId)]),
   }
 }
 
@@ -134,12 +137,13 @@ export function criteriaTable(ctx: ReportContext): TableView | null {
 export function materialsTable(pkg: ReportPackage): TableView | null {
   const m = pkg.result.materials ?? []
   if (!m.length) return null
+  const stress = columnUnit('MPa', pkg.units ?? 'SI')
   return {
     id: 'materials',
     title: 'Materials',
-    headers: ['material', 'used for', 'band', 'f_y [MPa]', 'f_u [MPa]', 'E [MPa]', 'source as stored'],
+    headers: ['material', 'used for', 'band', `f_y [${stress.unit}]`, `f_u [${stress.unit}]`, `E [${stress.unit}]`, 'source as stored'],
     numeric: [false, false, false, true, true, true, false],
-    rows: m.map((r) => [r.id, r.usedFor.join(', '), r.band, formatNumber(r.fy), formatNumber(r.fu), formatNumber(r.E), r.source]),
+    rows: m.map((r) => [r.id, r.usedFor.join(', '), r.band, formatNumber(stress.show(r.fy)), formatNumber(stress.show(r.fu)), formatNumber(stress.show(r.E)), r.source]),
   }
 }
 
@@ -173,15 +177,18 @@ export function governingTables(ctx: ReportContext): TableView[] {
     // Keep the table on the page: at most six positions (the ends and the most frequent governors).
     if (angles.length > 6) angles = [angles[0], ...angles.slice(1, -1).slice(0, 4), angles[angles.length - 1]]
     const at = angles.map((a) => positions.reduce((best, p) => (Math.abs(p.crankDeg - a) < Math.abs(best.crankDeg - a) ? p : best), positions[0]))
-    const row = (label: string, unit: string, get: (p: PositionResult) => number | undefined, largest: number | undefined): string[] => [
-      label,
-      unit,
-      ...at.map((p) => {
-        const v = clean(get(p))
-        return v === undefined ? '—' : formatNumber(v)
-      }),
-      largest === undefined ? '' : formatNumber(largest),
-    ]
+    const row = (label: string, siUnit: string, get: (p: PositionResult) => number | undefined, largest: number | undefined): string[] => {
+      const { unit, show } = columnUnit(siUnit, ctx.units)
+      return [
+        label,
+        unit ?? siUnit,
+        ...at.map((p) => {
+          const v = clean(get(p))
+          return v === undefined ? '—' : formatNumber(show(v))
+        }),
+        largest === undefined ? '' : formatNumber(show(largest)),
+      ]
+    }
     // Solver noise (1e-13 N in a link that carries nothing) prints as 0, as the envelope reports it.
     const noise = 1e-9 * Math.max(1, ...Object.values(env.pins).map((p) => p.value))
     const clean = (v: number | undefined) => (v !== undefined && Math.abs(v) < noise ? 0 : v)
@@ -215,7 +222,10 @@ export function inputsTable(pkg: ReportPackage): TableView {
     title: 'Inputs',
     headers: ['group', 'quantity', 'value', 'unit'],
     numeric: [false, false, true, false],
-    rows: pkg.inputRows.map((r) => [r.group, r.label, typeof r.value === 'number' ? formatNumber(r.value) : r.value, r.unit || '—']),
+    rows: pkg.inputRows.map((r) => {
+      const { unit, show } = columnUnit(r.unit, pkg.units ?? 'SI')
+      return [r.group, r.label, typeof r.value === 'number' ? formatNumber(show(r.value)) : r.value, unit || '—']
+    }),
   }
 }
 
@@ -324,6 +334,7 @@ export function titleView(pkg: ReportPackage, resultHash: string): TitleView {
       // The state is not printed here: it changes as the revision is signed (the title block carries it).
       ['revision', pkg.revision.label],
       ['basis', pkg.result.basis?.label ?? '—'],
+      ...(pkg.units === 'US' ? [['units', 'US customary (in, lbf, lbf·in, ksi); the working is in SI, the units of the clauses, each result followed by its US value'] as [string, string]] : []),
       ['generated', `${formatDate(pkg.generatedAt)} · engine ${pkg.engineVersion} · template ${pkg.templateVersion}`],
       ['result SHA-256', resultHash],
     ],

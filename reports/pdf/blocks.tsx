@@ -126,8 +126,9 @@ export function GoverningTables() {
 }
 
 export function ResultsTable({ section, id }: { section?: string; id?: string }) {
-  const tables = (useReport().pkg.result.tables ?? []).filter((t) => t.id !== 'checks-summary' && (id ? t.id === id : !section || t.section === section))
-  return <View>{tables.map((t) => <PdfTable key={t.id} view={tableView(t)} size={6.8} />)}</View>
+  const ctx = useReport()
+  const tables = (ctx.pkg.result.tables ?? []).filter((t) => t.id !== 'checks-summary' && (id ? t.id === id : !section || t.section === section))
+  return <View>{tables.map((t) => <PdfTable key={t.id} view={tableView(t, ctx.units)} size={6.8} />)}</View>
 }
 
 export function ChecksTable() {

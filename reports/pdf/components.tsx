@@ -66,7 +66,7 @@ function workingBody(ctx: ReportContext): ReactNode {
     out.push(<Text key={`h-${section}`} style={{ fontSize: 9.4, fontWeight: 700, marginTop: 4, marginBottom: 3 }} minPresenceAhead={60}>{APPENDIX_HEADS[section] ?? section}</Text>)
     out.push(<PdfSteps key={`s-${section}`} section={section} appendix />)
   }
-  for (const t of (ctx.pkg.result.tables ?? []).filter((x) => x.id.startsWith('tab.sweep'))) out.push(<PdfTable key={t.id} view={tableView(t)} size={6.6} />)
+  for (const t of (ctx.pkg.result.tables ?? []).filter((x) => x.id.startsWith('tab.sweep'))) out.push(<PdfTable key={t.id} view={tableView(t, ctx.units)} size={6.6} />)
   return out
 }
 

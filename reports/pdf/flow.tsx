@@ -91,7 +91,7 @@ export function blockHeight(k: ReactNode, ctx: ReportContext): number | null {
   if (t === PdfTable) return tableHeight(el.props.view as TableView, (el.props.size as number) ?? 7.4, el.props.title !== false, width)
   if (isSteps(k)) {
     const list = (k.props.appendix ? ctx.appendixBySection : ctx.bySection).get(k.props.section) ?? []
-    return list.reduce((a, { n, step }) => a + stepHeight(stepView(n, step, ctx.numberOf), ctx.pkg.paper), 0)
+    return list.reduce((a, { n, step }) => a + stepHeight(stepView(n, step, ctx), ctx.pkg.paper), 0)
   }
   return null
 }
@@ -162,7 +162,7 @@ export function segmentBody(body: ReactNode, ctx: ReportContext, used: number | 
     if (isSteps(kid)) {
       const { section, appendix } = kid.props
       const list = (appendix ? ctx.appendixBySection : ctx.bySection).get(section) ?? []
-      heights = list.map(({ n, step }) => stepHeight(stepView(n, step, ctx.numberOf), paper))
+      heights = list.map(({ n, step }) => stepHeight(stepView(n, step, ctx), paper))
       slice = (from, to) => <PdfSteps key={`${section}-${from}`} section={section} appendix={appendix} from={from} to={to} />
     } else {
       const p = kid.props

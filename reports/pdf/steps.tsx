@@ -70,14 +70,14 @@ export function PdfStepBox({ v }: { v: StepView }) {
 export function PdfSteps({ section, from = 0, to, appendix }: { section: string; from?: number; to?: number; appendix?: boolean }) {
   const ctx = useReport()
   const list = ((appendix ? ctx.appendixBySection : ctx.bySection).get(section) ?? []).slice(from, to)
-  return <View>{list.map(({ n, step }) => <PdfStepBox key={step.id} v={stepView(n, step, ctx.numberOf)} />)}</View>
+  return <View>{list.map(({ n, step }) => <PdfStepBox key={step.id} v={stepView(n, step, ctx)} />)}</View>
 }
 
 export function PdfStep({ id }: { id: string }) {
   const ctx = useReport()
   const n = ctx.numberOf.get(id)
   const step = ctx.pkg.result.steps.find((st) => st.id === id)
-  return n && step ? <PdfStepBox v={stepView(n, step, ctx.numberOf)} /> : null
+  return n && step ? <PdfStepBox v={stepView(n, step, ctx)} /> : null
 }
 
 export function PdfOtherSteps() {

@@ -68,7 +68,7 @@ export function StepBox({ v }: { v: StepView }) {
 export function Steps({ section }: { section: string }) {
   const ctx = useReport()
   const list = ctx.bySection.get(section) ?? []
-  return <div className="inv-steps">{list.map(({ n, step }) => <StepBox key={step.id} v={stepView(n, step, ctx.numberOf)} />)}</div>
+  return <div className="inv-steps">{list.map(({ n, step }) => <StepBox key={step.id} v={stepView(n, step, ctx)} />)}</div>
 }
 
 export function AppendixSteps() {
@@ -78,10 +78,10 @@ export function AppendixSteps() {
       {[...ctx.appendixBySection].map(([section, list]) => (
         <div key={section}>
           <h3>{section}</h3>
-          <div className="inv-steps">{list.map(({ n, step }) => <StepBox key={step.id} v={stepView(n, step, ctx.numberOf)} />)}</div>
+          <div className="inv-steps">{list.map(({ n, step }) => <StepBox key={step.id} v={stepView(n, step, ctx)} />)}</div>
         </div>
       ))}
-      {(ctx.pkg.result.tables ?? []).filter((t) => t.id.startsWith('tab.sweep')).map((t) => <HtmlTable key={t.id} view={tableView(t)} />)}
+      {(ctx.pkg.result.tables ?? []).filter((t) => t.id.startsWith('tab.sweep')).map((t) => <HtmlTable key={t.id} view={tableView(t, ctx.units)} />)}
     </>
   )
 }
@@ -90,7 +90,7 @@ export function Step({ id }: { id: string }) {
   const ctx = useReport()
   const n = ctx.numberOf.get(id)
   const step = ctx.pkg.result.steps.find((s) => s.id === id)
-  return n && step ? <StepBox v={stepView(n, step, ctx.numberOf)} /> : null
+  return n && step ? <StepBox v={stepView(n, step, ctx)} /> : null
 }
 
 export function OtherSteps() {
@@ -168,8 +168,9 @@ export function GoverningTables() {
 }
 
 export function ResultsTable({ section, id }: { section?: string; id?: string }) {
-  const tables = (useReport().pkg.result.tables ?? []).filter((t) => t.id !== 'checks-summary' && (id ? t.id === id : !section || t.section === section))
-  return <>{tables.map((t) => <HtmlTable key={t.id} view={tableView(t)} />)}</>
+  const ctx = useReport()
+  const tables = (ctx.pkg.result.tables ?? []).filter((t) => t.id !== 'checks-summary' && (id ? t.id === id : !section || t.section === section))
+  return <>{tables.map((t) => <HtmlTable key={t.id} view={tableView(t, ctx.units)} />)}</>
 }
 
 export function ChecksTable() {
