@@ -5,17 +5,11 @@
  * Bad input exits 1 with one line naming the field.
  */
 import { readFileSync } from 'node:fs'
-import { checksInUnits, runChecksCli } from '@/lib/checks'
-import { calculate } from '@/lib/calc/run'
+import { analyse } from '@/lib/analyse'
 
 function fail(message: string): never {
   process.stderr.write(`${message}\n`)
   process.exit(1)
-}
-
-const firstError = (errors: Record<string, string> | { path: string; message: string }[]) => {
-  const [path, message] = Array.isArray(errors) ? [errors[0]?.path, errors[0]?.message] : (Object.entries(errors)[0] ?? [])
-  return `error: ${path || '(input)'}: ${message ?? 'invalid input'}`
 }
 
 const file = process.argv[2]
@@ -27,15 +21,16 @@ try {
   fail(`error: ${file}: ${e instanceof Error ? e.message.split('\n')[0] : 'cannot read'}`)
 }
 
-let output: unknown
-if (typeof json === 'object' && json !== null && !('mechanism' in json)) {
-  const r = runChecksCli(json)
-  if (!r.ok) fail(firstError(r.issues))
-  output = { units: r.units, ...r.result }
-} else {
-  const run = calculate(json)
-  if (!run.ok) fail(firstError(run.fieldErrors))
-  const units = run.input.checks?.units ?? 'SI'
-  output = { ...run.result, checks: checksInUnits(run.result.checks, units) }
+// The same function as POST /api/v1/analyse: ranges, schema and rules first, so a bad field is one line.
+let out: ReturnType<typeof analyse>
+try {
+  out = analyse(json)
+} catch (e) {
+  // Not expected (tests/security/input-bounds.test.ts); still one line, never a stack trace.
+  fail(`error: (input): could not be calculated (${e instanceof Error ? e.message.split('\n')[0] : String(e)})`)
 }
-process.stdout.write(`${JSON.stringify(output, null, 2)}\n`)
+if (!out.ok) {
+  const [path, message] = Object.entries(out.fieldErrors)[0] ?? []
+  fail(`error: ${path && path !== '_form' ? path : '(input)'}: ${message ?? 'invalid input'}`)
+}
+process.stdout.write(`${JSON.stringify(out.output, null, 2)}\n`)

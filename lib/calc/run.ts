@@ -1,7 +1,9 @@
 import { checksInputSchema, ChecksInputError, runChecks, type ChecksInput } from '@/lib/checks'
 import { fieldErrorsOf } from '@/lib/schemas/field-errors'
 import { GENERAL_CAUTION } from '@/lib/cautions'
-import { mechanismInputSchema, runMechanism, type AnyMechanismInput } from './mechanism'
+import { rangeErrors } from '@/lib/bench/ranges'
+import { sizeIssues } from '@/lib/checks/validate'
+import { mechanismBoundErrors, mechanismInputSchema, runMechanism, type AnyMechanismInput } from './mechanism'
 import { formatNumber, texNumber } from '@/lib/units/format'
 import type { CalcResult, CalcVerdict, CheckItem, Criterion, MaterialUse, MechanismResult, Step } from '@/lib/contract'
 import { basisText } from './basis-text'
@@ -17,18 +19,36 @@ export interface CalcInput {
 export type ParsedCalcInput = { ok: true; input: CalcInput } | { ok: false; fieldErrors: Record<string, string> }
 
 /**
- * Reads one JSON object holding both parts (the keys of docs/engine.md and docs/checks.md side by side).
- * A missing `basis` means "kinematics and forces only". Errors are keyed by dotted field path.
+ * The bounds of new input beyond the schema, keyed by dotted path: every number in its range
+ * (lib/bench/ranges; the geometry by the ranges its mechanism declares), the number and names of load
+ * cases, the positions solved, and the counts and text lengths of the pin and link part. Inside them
+ * the engine gives finite numbers and one request does bounded work (tests/security/input-bounds.test.ts).
  */
-export function parseCalcInput(raw: unknown): ParsedCalcInput {
+export function inputBoundErrors(raw: unknown): Record<string, string> {
+  return {
+    ...rangeErrors(raw, { skipGeometry: true }),
+    ...Object.fromEntries(sizeIssues(raw).map((i) => [i.path, i.message])),
+    ...mechanismBoundErrors(raw),
+  }
+}
+
+/**
+ * Reads one JSON object holding both parts (the keys of docs/engine.md and docs/checks.md side by side).
+ * A missing `basis` means "kinematics and forces only". Errors are keyed by dotted field path: the
+ * schema's (shape, sign) and, for new input, the bounds (`inputBoundErrors`), whose message wins
+ * where both speak of one field. `{ stored: true }` reads inputs a revision already holds by the
+ * schema alone, so a record stored before a bound was added still prints as it was signed.
+ */
+export function parseCalcInput(raw: unknown, opts: { stored?: boolean } = {}): ParsedCalcInput {
   const mech = mechanismInputSchema.safeParse(raw)
   const hasBasis = typeof raw === 'object' && raw !== null && 'basis' in raw
   const checks = hasBasis ? checksInputSchema.safeParse(raw) : null
   const fieldErrors = {
     ...(mech.success ? {} : fieldErrorsOf(mech.error)),
     ...(checks && !checks.success ? fieldErrorsOf(checks.error) : {}),
+    ...(opts.stored ? {} : inputBoundErrors(raw)),
   }
-  if (!mech.success || (checks && !checks.success)) return { ok: false, fieldErrors }
+  if (Object.keys(fieldErrors).length > 0) return { ok: false, fieldErrors }
   return { ok: true, input: { mechanism: raw as AnyMechanismInput, checks: checks?.data ?? null } }
 }
 
@@ -145,10 +165,34 @@ export function runCalc(input: CalcInput): { ok: true; result: CalcResult } | { 
 
 export type Calculated = { ok: true; input: CalcInput; result: CalcResult } | { ok: false; fieldErrors: Record<string, string> }
 
-/** Parse and run in one step: what every caller with raw JSON (form, revision, CLI, preview) needs. */
+/** The path of the first number in a result that is NaN or ±Infinity (canonicalJson and JSON cannot carry them). */
+export function firstNonFinite(node: unknown, path = ''): string | null {
+  if (typeof node === 'number') return Number.isFinite(node) ? null : path || '(result)'
+  if (Array.isArray(node)) {
+    for (let i = 0; i < node.length; i++) {
+      const p = firstNonFinite(node[i], `${path}[${i}]`)
+      if (p) return p
+    }
+  } else if (node && typeof node === 'object') {
+    for (const [k, v] of Object.entries(node)) {
+      const p = firstNonFinite(v, path ? `${path}.${k}` : k)
+      if (p) return p
+    }
+  }
+  return null
+}
+
+/**
+ * Parse and run in one step: what every caller with raw JSON (form, revision, CLI, preview) needs.
+ * The answer is a result of finite numbers or field errors: a non-finite number (which the ranges
+ * are there to prevent, tests/security/input-bounds.test.ts) is reported, never passed on.
+ */
 export function calculate(raw: unknown): Calculated {
   const parsed = parseCalcInput(raw)
   if (!parsed.ok) return parsed
   const run = runCalc(parsed.input)
-  return run.ok ? { ok: true, input: parsed.input, result: run.result } : run
+  if (!run.ok) return run
+  const bad = firstNonFinite(run.result)
+  if (bad) return { ok: false, fieldErrors: { _form: `these inputs could not be calculated: the result holds a value that is not a finite number (${bad}); change the inputs, and report them if they look ordinary` } }
+  return { ok: true, input: parsed.input, result: run.result }
 }

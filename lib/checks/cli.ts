@@ -7,9 +7,10 @@ import type { CheckItem } from '@/lib/contract'
 import { fromSI, kindOfSILabel, displayUnit, type UnitSystem } from '@/lib/units'
 import { z } from 'zod'
 import { checkComponent, type ChecksResult } from './run'
+import { rangeErrors } from '@/lib/bench/ranges'
 import { checksInputSchema } from './schema'
 import { forceToSI } from './to-si'
-import { ChecksInputError, zodIssues, type FieldIssue } from './validate'
+import { ChecksInputError, sizeIssues, zodIssues, type FieldIssue } from './validate'
 
 const num = (what: string) => z.number({ error: `${what} must be a number` })
 
@@ -43,7 +44,14 @@ export function checksInUnits(checks: CheckItem[], system: UnitSystem): CheckIte
 
 export function runChecksCli(json: unknown): CliResult {
   const p = singleComponentSchema.safeParse(json)
-  if (!p.success) return { ok: false, issues: zodIssues(p.error) }
+  // Every number in its range (lib/bench/ranges; US input compared in SI) and every text and count in
+  // its size first; where the schema speaks of the same field, the bound says more.
+  const ranges = [...Object.entries(rangeErrors(json)).map(([path, message]) => ({ path, message })), ...sizeIssues(json)]
+  if (!p.success) {
+    const issues = zodIssues(p.error)
+    return { ok: false, issues: [...ranges, ...issues.filter((i) => !ranges.some((r) => r.path === i.path))] }
+  }
+  if (ranges.length > 0) return { ok: false, issues: ranges }
   const { component, ...input } = p.data
   const sys = input.units
   try {

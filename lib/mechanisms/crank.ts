@@ -5,12 +5,13 @@
 import { z } from 'zod'
 import type { GeometryField } from './types'
 import { nonNegative, positive } from './numbers'
+import { LINK_RANGE, OFFSET_RANGE } from '@/lib/bench/ranges'
 
 export const crankShape = { crank: positive(), crankPivotOffset: nonNegative().optional() }
 
 export const CRANK_FIELDS: readonly GeometryField[] = [
-  { key: 'crank', label: 'Crank r', description: 'Crank length r', unit: 'mm' },
-  { key: 'crankPivotOffset', label: 'Crank pivot offset e', description: 'Crank pivot offset e from the pole', unit: 'mm', hint: 'e = r gives the straight line' },
+  { key: 'crank', label: 'Crank r', description: 'Crank length r', unit: 'mm', range: LINK_RANGE },
+  { key: 'crankPivotOffset', label: 'Crank pivot offset e', description: 'Crank pivot offset e from the pole', unit: 'mm', hint: 'e = r gives the straight line', range: OFFSET_RANGE },
 ]
 
 export type CrankGeometry = { crank: number; crankPivotOffset: number }

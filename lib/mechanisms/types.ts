@@ -6,6 +6,7 @@
 import type { z } from 'zod'
 import type { InversorCell } from '@/lib/linkage/cells/cell'
 import type { MechanismId } from '@/lib/contract'
+import type { NumberRange } from '@/lib/bench/ranges'
 
 export type { MechanismId }
 
@@ -22,6 +23,8 @@ export interface GeometryField {
   hint?: string
   /** Step of the number field (`0.01`); any value when absent. */
   step?: string
+  /** The range a calc input must keep (lib/bench/ranges), checked at the field before the engine runs. */
+  range?: NumberRange
 }
 
 /** Parsed geometry: numbers by key, defaults applied. */

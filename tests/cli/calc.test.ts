@@ -51,3 +51,48 @@ describe('required stroke', () => {
     expect(tooLong.json!.verdict).toMatchObject({ pass: false })
   }, 30_000)
 })
+
+/*
+ * Issue 13: the CLI prints what analyse() (the same function as POST /api/v1/analyse) gives —
+ * tests/security/input-bounds.test.ts shows over random inputs that it is finite — and refuses a
+ * number outside its range with one line naming the field, exit 1, no stack trace.
+ */
+describe('bounds', () => {
+  it('an input at the extremes of every range prints finite JSON identical to analyse()', async () => {
+    const { analyse } = await import('@/lib/analyse')
+    // Every number at a limit (lib/bench/ranges.ts); l − s = 2r keeps the Peaucellier crank in reach (docs/engine.md).
+    const input = {
+      mechanism: 'peaucellier',
+      geometry: { arm: 5000, side: 2000, crank: 1600, crankPivotOffset: 1600 },
+      loads: [{ name: 'A', fx: 1e6, fy: -1e6 }, { name: 'B', fx: -1e6, fy: 1e6 }],
+      toggleMarginDeg: 5,
+      amplificationLimit: 2,
+      minTransmissionAngleDeg: 90,
+      straightnessTolerance: 0.001,
+      requiredStroke: 5000,
+      selfWeight: { density: 25000, area: 1e5, g: 100, directionDeg: 360 },
+      basis: { kind: 'en1993', gammaM0: 2, gammaM1: 2, gammaM2: 2, gammaM6ser: 2 },
+      factors: { load: 3, dynamic: 5 },
+      defaults: { joint: { pinDiameter: 200, holeDiameter: 210, middle: { thickness: 200 }, outer: { thickness: 200 }, gap: 100 }, link: { section: { shape: 'flat', width: 500, thickness: 200 }, eye: { edgeAlong: 500 }, effectiveLengthFactor: 5 } },
+    }
+    const r = calc(input)
+    expect(r.status).toBe(0)
+    const direct = analyse(input)
+    expect(direct.ok).toBe(true)
+    if (direct.ok) expect(r.json).toEqual(JSON.parse(JSON.stringify(direct.output)))
+    expect((r.json!.checks as unknown[]).length).toBeGreaterThan(0)
+  }, 30_000)
+
+  it('an arm of 1e308 mm is one line at its field', () => {
+    const r = calc({ ...DEMO_CALCS[0].inputs, geometry: { arm: 1e308, side: 100, crank: 100 } })
+    expect(r.status).toBe(1)
+    expect(r.stderr).toBe('error: geometry.arm: must be from 1 mm to 5000 mm: links from 1 mm to 5 m cover bench-top guides to machine frames')
+  }, 30_000)
+
+  it('a pin of 8 in in US units is one line with the limits in inches', () => {
+    const r = calc({ units: 'US', basis: { kind: 'allowable' }, joints: { P: { pinDiameter: 8, holeDiameter: 8.1, middle: { thickness: 0.3 }, outer: { thickness: 0.2 } } }, component: { joint: 'P', force: 1000 } })
+    expect(r.status).toBe(1)
+    expect(r.stderr.split('\n')).toHaveLength(1)
+    expect(r.stderr).toMatch(/^error: joints\.P\.pinDiameter: must be from 0\.07874 in to 7\.874 in: /)
+  }, 30_000)
+})
