@@ -50,8 +50,11 @@ export function basisText(input: CalcInput, mech: MechanismResult, materials: Ma
   const loads = m.loads.map((l) => `“${l.name}” (F_x = ${n(l.fx)} N, F_y = ${n(l.fy)} N)`).join(', ')
   statements.push(`Loads act at the tracer T as the inputs give them: ${loads}.${m.selfWeight ? ` The links' self-weight (${n(m.selfWeight.density)} kg/m³ over ${n(m.selfWeight.area)} mm²) is added to every load case.` : ' Self-weight of the links is not included.'}`)
   const dyn = c?.factors.dynamic ?? 1
+  const speed = m.operatingSpeed
   statements.push(
-    `The analysis is quasi-static: no operating speed is stated and no inertia force is computed${c ? `; the dynamic factor γ_dyn = ${n(dyn)} of the inputs is the only allowance for motion${dyn === 1 ? ' (none)' : ''}` : ''}.`,
+    speed
+      ? `The crank turns at a constant ${n(speed.rpm)} rev/min${speed.toolMass ? ` carrying ${n(speed.toolMass)} kg of tool and carriage at T` : ''}: each load case is also solved at that speed, with d'Alembert's inertia forces and couples of every link (slender bars of their sections and materials) added, and the design forces are the largest over the static cases and the cases at speed${c && dyn !== 1 ? `; the dynamic factor γ_dyn = ${n(dyn)} of the inputs applies on top` : ''}.`
+      : `The analysis is quasi-static: no operating speed is stated and no inertia force is computed${c ? `; the dynamic factor γ_dyn = ${n(dyn)} of the inputs is the only allowance for motion${dyn === 1 ? ' (none)' : ''}` : ''}.`,
   )
   const w = mech.workingRange
   if (w && mech.feasibility.ok) {

@@ -121,6 +121,10 @@ export function inputRowsOf(input: CalcInput): InputRow[] {
     rows.push({ group: 'Load cases (at the tracer)', label: `${l.name}: Fy`, value: l.fy, unit: 'N' })
   }
   if (m.selfWeight) flatten('Self-weight of links', '', m.selfWeight, rows)
+  if (m.operatingSpeed) {
+    rows.push({ group: 'Operating speed', label: 'Crank speed n (constant)', value: m.operatingSpeed.rpm, unit: 'rev/min' })
+    rows.push({ group: 'Operating speed', label: 'Tool and carriage mass at T', value: m.operatingSpeed.toolMass ?? 0, unit: 'kg' })
+  }
   const c = input.checks
   if (c) {
     const sys = c.units

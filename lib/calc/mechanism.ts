@@ -17,6 +17,11 @@ export const DEFAULT_MIN_TRANSMISSION_DEG = 30
 /** Straightness the guide must hold over the working range unless the engineer states it, mm. */
 export const DEFAULT_STRAIGHTNESS_TOLERANCE = 0.1
 
+/** Largest crank speed the calc takes, rev/min (common practice for a linkage guide in a packaging machine). */
+export const MAX_RPM = 1200
+/** Largest tool mass at the tracer, kg. */
+export const MAX_TOOL_MASS = 500
+
 const load = z.object({
   name: z.string({ error: 'must be a text' }).min(1, { error: 'must not be empty' }),
   fx: num(),
@@ -54,6 +59,13 @@ const common = {
   /** Largest deviation of the tracer from a straight line allowed over the working range, mm. */
   straightnessTolerance: positive().default(DEFAULT_STRAIGHTNESS_TOLERANCE),
   amplificationLimit: num().gt(1, { error: 'must be greater than 1' }).default(100),
+  /** Crank speed (constant) and the tool's mass at the tracer: a case at speed beside every static case. */
+  operatingSpeed: z
+    .object({
+      rpm: positive().max(MAX_RPM, { error: `must be at most ${MAX_RPM} rev/min: a guide cell beyond that belongs to a dynamic analysis of its own` }),
+      toolMass: nonNegative().max(MAX_TOOL_MASS, { error: `must be at most ${MAX_TOOL_MASS} kg` }).optional(),
+    })
+    .optional(),
 }
 
 const mechanismId = z.string({ error: () => mechanismChoiceMessage() }).refine((id) => findMechanism(id) !== undefined, { error: () => mechanismChoiceMessage() })

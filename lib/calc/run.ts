@@ -7,6 +7,7 @@ import { mechanismBoundErrors, mechanismInputSchema, runMechanism, type AnyMecha
 import { formatNumber, texNumber } from '@/lib/units/format'
 import type { CalcResult, CalcVerdict, CheckItem, Criterion, MaterialUse, MechanismResult, Step } from '@/lib/contract'
 import { basisText } from './basis-text'
+import { withOperatingSpeed } from './at-speed'
 
 export type { CalcResult, CalcVerdict }
 
@@ -110,7 +111,10 @@ function verdictOf(result: MechanismResult, checks: CheckItem[], criteria: Crite
  * as field errors (`joints.P.holeDiameter`), not as exceptions.
  */
 export function runCalc(input: CalcInput): { ok: true; result: CalcResult } | { ok: false; fieldErrors: Record<string, string> } {
-  const mech = runMechanism(input.mechanism)
+  // A case at speed joins each static case when an operating speed is given (lib/calc/at-speed.ts).
+  const speed = withOperatingSpeed(runMechanism(input.mechanism), mechanismInputSchema.parse(input.mechanism), input.checks)
+  if (!speed.ok) return speed
+  const mech = speed.result
   let checks: CheckItem[] = []
   let cautions = [GENERAL_CAUTION]
   let materials: MaterialUse[] = []

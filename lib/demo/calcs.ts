@@ -57,6 +57,8 @@ export const DEMO_CALCS = [
       geometry: { arm: 200, side: 80, crank: 75, crankPivotOffset: 75 },
       loads: [{ name: 'Folding a flap', fx: 0, fy: -140 }],
       requiredStroke: 150,
+      // The folder runs at 90 cycles a minute with a 0.8 kg folding shoe on the tracer.
+      operatingSpeed: { rpm: 90, toolMass: 0.8 },
       basis: { kind: 'allowable', factorOfSafety: 2.5 },
       factors: { load: 1, dynamic: 1.3 },
       defaults: { joint: { ...DEFAULT_PIN, pinDiameter: 8, holeDiameter: 8.4 }, link: { ...DEFAULT_LINK, section: { shape: 'flat', width: 20, thickness: 6 } } },

@@ -80,6 +80,12 @@ export const SELF_WEIGHT_FIELDS: InputFieldDef[] = [
   { path: 'selfWeight.area', label: 'Link section A', unit: 'mm²', step: '1' },
 ]
 
+/** Optional: the crank's speed and the tool's mass, for the forces at speed (a case at speed beside each load case). */
+export const OPERATING_SPEED_FIELDS: InputFieldDef[] = [
+  { path: 'operatingSpeed.rpm', label: 'Crank speed n', unit: 'rev/min', step: '1', hint: 'constant; leave empty for static forces only' },
+  { path: 'operatingSpeed.toolMass', label: 'Tool mass at T', unit: 'kg', step: '0.1', hint: 'tool and carriage; their weight belongs in the load cases' },
+]
+
 /** Only the sizes an engineer typically changes per component; anything else stays on the defaults. */
 export const OVERRIDE_FIELDS = (calcType: CalcType): InputFieldDef[] => {
   const { joints, links } = mechanismComponents(calcType)
