@@ -4,7 +4,7 @@
  * summary table. The governing flag is set here so every basis gets it alike.
  */
 import type { CheckItem, Step, Table } from '@/lib/contract'
-import { formatNumber, utilisationShown } from '@/lib/units/format'
+import { formatNumber, MET_TOLERANCE, utilisationShown } from '@/lib/units/format'
 import { fmt, type CheckSpec, type Demand } from './spec'
 
 export interface ComponentResult {
@@ -56,7 +56,7 @@ export function evaluate(kind: 'pin' | 'link', name: string, basis: string, spec
       throw new Error(`internal: ${component} ${s.key} gave demand ${s.demand}, capacity ${s.capacity}; the input validation should have caught this`)
     }
     const utilisation = s.demand / s.capacity
-    const pass = utilisation <= 1 + 1e-9
+    const pass = utilisation <= 1 + MET_TOLERANCE
     const stepId = `chk.${kind}.${name}.${s.key}`
     const checkKind = s.kind ?? 'strength'
     items.push({

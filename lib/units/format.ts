@@ -94,10 +94,19 @@ export function texNumber(x: number, dir: Direction = 'nearest'): string {
 /** Bracketed when negative, for a value put into an expression. */
 export const texNumberP = (x: number): string => (roundShown(x) < 0 ? `\\left(${texNumber(x)}\\right)` : texNumber(x))
 
-/** Utilisation as shown: three decimals, rounded up, so a value above 1 never reads as 1.000. */
+/**
+ * A check is met when u ≤ 1 + MET_TOLERANCE (lib/checks/report.ts): a relative allowance for binary
+ * noise in demand and capacity.
+ */
+export const MET_TOLERANCE = 1e-9
+
+/**
+ * Utilisation as shown: three decimals, rounded up, so a value above 1 never reads as 1.000 — and,
+ * with the same relative allowance as the verdict, a met check never reads as 1.001.
+ */
 export function utilisationShown(u: number): number {
   if (!Number.isFinite(u)) return u
-  return Math.max(0, Number(roundTo(u, 0.001, 'up').toFixed(3)))
+  return Math.max(0, Number((Math.ceil((u / 0.001) * (1 - MET_TOLERANCE)) * 0.001).toFixed(3)))
 }
 
 export function formatUtilisation(u: number): string {

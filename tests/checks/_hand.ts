@@ -27,6 +27,7 @@ export interface Item {
   pass: boolean
   governing: boolean
   loadCase?: string
+  crankDeg?: number
   kind?: 'strength' | 'detailing'
 }
 export interface StepLike {
