@@ -49,11 +49,15 @@ function bodiesOf(links: string[], checks: ChecksInput | null, selfWeight: Input
   return out
 }
 
-/** A link's mass and inertia steps identical to an earlier link's (same section, material and length) go to the appendix. */
+/**
+ * Supporting steps go to the appendix: every moment of inertia, the added mass (an input), and a link's
+ * mass identical to an earlier link's (same section, material and length).
+ */
 function repeatsToAppendix(steps: Step[]): Step[] {
   const seen = new Set<string>()
   return steps.map((s) => {
-    const kind = /^dyn\.(mass|inertia)\./.exec(s.id)?.[1]
+    if (/^dyn\.(inertia|added-mass)\./.test(s.id)) return { ...s, appendix: true }
+    const kind = /^dyn\.(mass)\./.exec(s.id)?.[1]
     if (!kind || typeof s.value !== 'number') return s
     const key = `${kind}:${s.value}`
     if (!seen.has(key)) {

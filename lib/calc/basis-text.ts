@@ -102,7 +102,9 @@ export function basisText(input: CalcInput, mech: MechanismResult, materials: Ma
     const dj = c.defaults.joint
     if (dj?.pinDiameter !== undefined) holes.add((dj.holeDiameter ?? dj.pinDiameter + 0.1) - dj.pinDiameter)
     assumptions.push(
-      `Pin clearances are taken as zero in the kinematics${holes.size ? `; the hole clearance of the inputs (d₀ − d = ${[...holes].map((h) => n(h)).join(', ')} mm) adds directly to the deviation from the line` : ''}.`,
+      m.tolerances
+        ? `The ideal line is found for exact links on tight pins; the section on straightness as built adds the link tolerances (ISO 2768-1 class ${m.tolerances.toleranceClass ?? 'm'} unless a length has its own) and the hole clearance of the inputs (d₀ − d = ${[...holes].map((h) => n(h)).join(', ')} mm), each pin pushed along its force.`
+        : `Pin clearances are taken as zero in the kinematics${holes.size ? `; the hole clearance of the inputs (d₀ − d = ${[...holes].map((h) => n(h)).join(', ')} mm) adds directly to the deviation from the line` : ''}.`,
     )
     references.push(...materialRefs(materials))
   } else {

@@ -121,6 +121,14 @@ export function inputRowsOf(input: CalcInput): InputRow[] {
     rows.push({ group: 'Load cases (at the tracer)', label: `${l.name}: Fy`, value: l.fy, unit: 'N' })
   }
   if (m.selfWeight) flatten('Self-weight of links', '', m.selfWeight, rows)
+  if (m.tolerances) {
+    const t = m.tolerances
+    rows.push({ group: 'Straightness as built', label: 'General tolerance class (ISO 2768-1)', value: t.toleranceClass ?? 'm', unit: '' })
+    for (const [item, pm] of Object.entries(t.lengths ?? {})) rows.push({ group: 'Straightness as built', label: `Tolerance of ${item} (±)`, value: pm, unit: 'mm' })
+    rows.push({ group: 'Straightness as built', label: 'Monte Carlo samples', value: t.samples ?? 2000, unit: '' })
+    rows.push({ group: 'Straightness as built', label: 'Seed of the random stream', value: t.seed ?? 1, unit: '' })
+    rows.push({ group: 'Straightness as built', label: 'Distribution of each length', value: t.distribution ?? 'normal', unit: '' })
+  }
   if (m.operatingSpeed) {
     rows.push({ group: 'Operating speed', label: 'Crank speed n (constant)', value: m.operatingSpeed.rpm, unit: 'rev/min' })
     rows.push({ group: 'Operating speed', label: 'Tool and carriage mass at T', value: m.operatingSpeed.toolMass ?? 0, unit: 'kg' })

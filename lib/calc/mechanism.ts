@@ -22,6 +22,11 @@ export const MAX_RPM = 1200
 /** Largest tool mass at the tracer, kg. */
 export const MAX_TOOL_MASS = 500
 
+/** Largest Monte Carlo run per calc (each sample solves the cell at 50 positions; 20 000 take about 0.2 s here). */
+export const MAX_SAMPLES = 20_000
+/** Largest ± tolerance of a link length, mm. */
+export const MAX_LENGTH_TOLERANCE = 5
+
 const load = z.object({
   name: z.string({ error: 'must be a text' }).min(1, { error: 'must not be empty' }),
   fx: num(),
@@ -64,6 +69,23 @@ const common = {
     .object({
       rpm: positive().max(MAX_RPM, { error: `must be at most ${MAX_RPM} rev/min: a guide cell beyond that belongs to a dynamic analysis of its own` }),
       toolMass: nonNegative().max(MAX_TOOL_MASS, { error: `must be at most ${MAX_TOOL_MASS} kg` }).optional(),
+    })
+    .optional(),
+  /** Straightness of the built guide: link tolerances (a general class or per link) and the pins' clearance. */
+  tolerances: z
+    .object({
+      toleranceClass: z.enum(['f', 'm', 'c', 'v'], { error: 'must be f, m, c or v (ISO 2768-1 fine, medium, coarse, very coarse)' }).optional(),
+      lengths: z
+        .record(z.string().max(20, { error: 'must be a link or frame name' }), nonNegative().max(MAX_LENGTH_TOLERANCE, { error: `must be at most ${MAX_LENGTH_TOLERANCE} mm` }))
+        .refine((r) => Object.keys(r).length <= 50, { error: 'must list at most 50 lengths' })
+        .optional(),
+      samples: num()
+        .int({ error: 'must be a whole number' })
+        .min(0, { error: 'must be 0 (worst case only) or more' })
+        .max(MAX_SAMPLES, { error: `must be at most ${MAX_SAMPLES}: a larger run belongs to a study of its own` })
+        .optional(),
+      seed: num().int({ error: 'must be a whole number' }).min(0, { error: 'must not be negative' }).max(2 ** 31, { error: 'must be below 2³¹' }).optional(),
+      distribution: z.enum(['normal', 'uniform'], { error: 'must be normal or uniform' }).optional(),
     })
     .optional(),
 }

@@ -8,6 +8,7 @@ import { formatNumber, texNumber } from '@/lib/units/format'
 import type { CalcResult, CalcVerdict, CheckItem, Criterion, MaterialUse, MechanismResult, Step } from '@/lib/contract'
 import { basisText } from './basis-text'
 import { withOperatingSpeed } from './at-speed'
+import { withTolerances } from './tolerances'
 
 export type { CalcResult, CalcVerdict }
 
@@ -112,9 +113,13 @@ function verdictOf(result: MechanismResult, checks: CheckItem[], criteria: Crite
  */
 export function runCalc(input: CalcInput): { ok: true; result: CalcResult } | { ok: false; fieldErrors: Record<string, string> } {
   // A case at speed joins each static case when an operating speed is given (lib/calc/at-speed.ts).
-  const speed = withOperatingSpeed(runMechanism(input.mechanism), mechanismInputSchema.parse(input.mechanism), input.checks)
+  // So do the straightness under tolerances and clearance when asked for (lib/calc/tolerances.ts).
+  const parsed = mechanismInputSchema.parse(input.mechanism)
+  const speed = withOperatingSpeed(runMechanism(input.mechanism), parsed, input.checks)
   if (!speed.ok) return speed
-  const mech = speed.result
+  const toleranced = withTolerances(speed.result, parsed, input.checks)
+  if (!toleranced.ok) return toleranced
+  const mech = toleranced.result
   let checks: CheckItem[] = []
   let cautions = [GENERAL_CAUTION]
   let materials: MaterialUse[] = []

@@ -1,6 +1,7 @@
 /** The report components, drawn with react-pdf primitives. */
 import { Text, View } from '@react-pdf/renderer'
 import { useReport } from '../model/react-context'
+import type { ReportContext } from '../model/context'
 import type { FigureView } from '../model/figures'
 import { diagramFigure, plotFigure, utilisationFigure } from '../model/figures'
 import {
@@ -261,10 +262,17 @@ registerBlockHeight(Changes, (_el, ctx, width) => {
   const v = changesView(ctx)
   return v ? linesHeight([v.summary], width + 11) + v.tables.reduce((a, t) => a + tableHeight(t, 7, true, width) + 8, 0) : 0
 })
+const resultsTables = (el: { props: Record<string, unknown> }, ctx: ReportContext) => {
+  const { section, id } = el.props as { section?: string; id?: string }
+  return (ctx.pkg.result.tables ?? []).filter((t) => t.id !== 'checks-summary' && (id ? t.id === id : !section || t.section === section)).map((t) => tableView(t, ctx.units))
+}
+registerBlockHeight(ResultsTable, (el, ctx, width) => resultsTables(el, ctx).reduce((a, t) => a + tableHeight(t, 6.8, true, width) + 8, 0))
+registerBlockExpand(ResultsTable, (el, ctx) => resultsTables(el, ctx).map((t) => <PdfTable key={t.id} view={t} size={6.8} />))
 registerBlockExpand(Changes, (_el, ctx) => {
   const v = changesView(ctx)
   return v ? [<Text key="summary" style={{ marginBottom: 6 }}>{v.summary}</Text>, ...v.tables.map((t) => <PdfTable key={t.id} view={t} size={7} />)] : []
 })
+registerBlockExpand(InputsTable, (_el, ctx) => (ctx.pkg.inputRows.length ? [<PdfTable key="inputs" view={inputsTable(ctx.pkg)} title={false} size={7.4} />] : []))
 registerBlockExpand(GoverningTables, (_el, ctx) => governingTables(ctx).map((t) => <PdfTable key={t.id} view={t} size={7} />))
 registerBlockExpand(ChecksTable, (_el, ctx) => {
   const checks = ctx.pkg.result.checks ?? []

@@ -17,7 +17,7 @@ import { PdfPage, SectionHead } from './frame'
 import { MathBlock } from './math'
 import { A, Code, Em, H2, H3, LI, MathInline, OL, P, Strong, UL } from './prose'
 import { PdfOtherSteps, PdfStep, PdfSteps } from './steps'
-import { HEAD, HEAD_GAP, blockHeight, segmentBody } from './flow'
+import { HEAD, HEAD_GAP, leadHeight, segmentBody } from './flow'
 import { lineCount, pageBudget } from './measure'
 import { registerBlockHeight } from './flow'
 import { BODY_SIZE, LINE, contentWidth } from './styles'
@@ -145,7 +145,7 @@ function Paginate({ children, document }: { children?: ReactNode; document: (pag
     const kids = Children.toArray(sec.body)
     // A continuing section whose heading and first block do not fit what is left starts a page.
     if (!startsPage) {
-      const first = kids.length ? blockHeight(kids[0], ctx) : 0
+      const first = leadHeight(kids, ctx)
       if (used === null || first === null || used + HEAD_GAP + HEAD + first > budget) startsPage = true
     }
     const headUsed = startsPage ? HEAD : (used as number) + HEAD_GAP + HEAD

@@ -127,6 +127,34 @@ function isTable(k: ReactNode): k is ReactElement<TableProps> {
   return isValidElement<TableProps>(k) && k.type === PdfTable && k.props.from === undefined && k.props.view.rows.length > 12
 }
 
+/** How much of the page a block needs to start there: a step list or a long table only its head and first items (it is cut across pages). */
+function startHeight(kid: ReactNode, ctx: ReportContext): number | null {
+  if (isTable(kid)) {
+    const size = kid.props.size ?? 7.4
+    return tableHeadHeight(kid.props.view, size, kid.props.title !== false) + 5 * tableRowHeight(size)
+  }
+  if (isSteps(kid)) {
+    const { section, appendix } = kid.props
+    const [one] = (appendix ? ctx.appendixBySection : ctx.bySection).get(section) ?? []
+    return one ? stepHeight(stepView(one.n, one.step, ctx), ctx.pkg.paper) : 0
+  }
+  return blockHeight(kid, ctx)
+}
+
+/**
+ * How much of the page a section body needs to start below its heading: its first block's start, and
+ * with a heading or lead-in paragraph the start of what follows too (segmentBody keeps them together).
+ */
+export function leadHeight(body: ReactNode[], ctx: ReportContext): number | null {
+  const kids = expand(body, ctx)
+  if (!kids.length) return 0
+  const h = startHeight(kids[0], ctx)
+  const leads = isValidElement(kids[0]) && (kids[0].type === P || kids[0].type === H2 || kids[0].type === H3) && kids.length > 1
+  if (!leads) return h
+  const next = startHeight(kids[1], ctx)
+  return h === null || next === null ? null : h + Math.min(next, 200)
+}
+
 /**
  * The body as segments, each a page: the first continues the page in progress, whose height already
  * used is `used` (null: unknown), every later one starts a new page. Step lists and long tables are cut

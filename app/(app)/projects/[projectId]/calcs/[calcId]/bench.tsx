@@ -161,7 +161,8 @@ export function Bench(props: BenchProps) {
     setServerErrors((e) => (e[path] ? Object.fromEntries(Object.entries(e).filter(([k]) => k !== path)) : e))
     if (def.kind !== 'number') {
       setParseErrors(({ [path]: _, ...rest }) => rest)
-      setInputs((v) => setPath(v, path, text))
+      // An empty choice ("not analysed") removes the key, as an empty number does.
+      setInputs((v) => setPath(v, path, def.kind === 'option' && text === '' ? undefined : text))
       return
     }
     const parsed = parseDecimal(text)

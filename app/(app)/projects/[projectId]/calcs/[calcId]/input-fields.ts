@@ -86,6 +86,23 @@ export const OPERATING_SPEED_FIELDS: InputFieldDef[] = [
   { path: 'operatingSpeed.toolMass', label: 'Tool mass at T', unit: 'kg', step: '0.1', hint: 'tool and carriage; their weight belongs in the load cases' },
 ]
 
+/** Optional: the straightness of the built guide under link tolerances and pin clearance. */
+export const TOLERANCE_FIELDS: InputFieldDef[] = [
+  {
+    path: 'tolerances.toleranceClass',
+    label: 'Tolerance class',
+    hint: 'ISO 2768-1 general tolerances of the link lengths; the pin clearance comes from the pins',
+    options: [
+      { value: '', label: 'not analysed' },
+      { value: 'f', label: 'f (fine)' },
+      { value: 'm', label: 'm (medium)' },
+      { value: 'c', label: 'c (coarse)' },
+      { value: 'v', label: 'v (very coarse)' },
+    ],
+  },
+  { path: 'tolerances.samples', label: 'Monte Carlo samples', step: '100', hint: 'with a class: 0 for the worst case only, at most 20 000 (default 2000)' },
+]
+
 /** Only the sizes an engineer typically changes per component; anything else stays on the defaults. */
 export const OVERRIDE_FIELDS = (calcType: CalcType): InputFieldDef[] => {
   const { joints, links } = mechanismComponents(calcType)

@@ -4,7 +4,7 @@ import { useRef, type ReactNode } from 'react'
 import type { MechanismId as CalcType } from '@/lib/mechanisms'
 import { rangeFor, rangeMessage } from '@/lib/bench/ranges'
 import type { UnitSystem } from '@/lib/units'
-import { BASIS_FIELDS, BASIS_OPTIONS, FACTOR_FIELDS, geometryFields, LINK_FIELDS, OPERATING_SPEED_FIELDS, OVERRIDE_FIELDS, PIN_FIELDS, SELF_WEIGHT_FIELDS, STROKE_FIELDS, type InputFieldDef } from './input-fields'
+import { BASIS_FIELDS, BASIS_OPTIONS, FACTOR_FIELDS, geometryFields, LINK_FIELDS, OPERATING_SPEED_FIELDS, OVERRIDE_FIELDS, PIN_FIELDS, SELF_WEIGHT_FIELDS, TOLERANCE_FIELDS, STROKE_FIELDS, type InputFieldDef } from './input-fields'
 import { displayUnitOf, showValue } from './units'
 
 /** How the form reads and changes the working inputs the bench holds (SI inside). */
@@ -174,6 +174,7 @@ export function InputsForm({ calcType, materials, b, header }: { calcType: CalcT
       <Group title="Links (every link)">{LINK_FIELDS(materials).map(field)}</Group>
       <Group title="Self-weight (optional)">{SELF_WEIGHT_FIELDS.map(field)}</Group>
       <Group title="Operating speed (optional)">{OPERATING_SPEED_FIELDS.map(field)}</Group>
+      <Group title="Straightness as built (optional)">{TOLERANCE_FIELDS.map(field)}</Group>
       <details className="border-t border-rule pt-3" open={OVERRIDE_FIELDS(calcType).some((d) => b.error(d.path))}>
         <summary className="h2 cursor-pointer">Per joint and link (overrides the above)</summary>
         <p className="mt-1 text-[11px] text-ink/70">Leave empty to use the values for every joint or link. A flat bar width needs its thickness too.</p>
