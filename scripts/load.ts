@@ -7,6 +7,7 @@
  *   - the register API      GET /api/v1/projects/:p/calcs                       (bearer token)
  *   - the calc page         GET /projects/:p/calcs/:c                          (session cookie)
  *   - the stored PDF        GET /api/v1/projects/:p/calcs/:c/revisions/:r/pdf  (A4, stored)
+ *   - the same for an issued revision (each download of a sealed record is audited)
  *   - the register API again while Letter PDFs (rendered on request) run beside it (`--heavy`)
  * and prints requests/s, p50, p95, p99 and max latency and the non-2xx count of each. Several
  * `--url`s spread the connections over instances (see README, "Two instances").
@@ -56,9 +57,16 @@ async function fixtures() {
     .orderBy(desc(revisions.createdAt))
     .limit(1)
   if (!row) throw new Error('no revision with a stored PDF in the demo project')
+  // An issued revision too: its downloads are audited (a sealed record).
+  const [issued] = await db
+    .select({ calcId: calcs.id, revisionId: revisions.id })
+    .from(revisions)
+    .innerJoin(calcs, eq(calcs.id, revisions.calcId))
+    .where(and(eq(calcs.projectId, project.id), eq(revisions.state, 'issued'), isNotNull(revisions.pdfKey)))
+    .limit(1)
   const session = await lucia.createSession(user.id, {})
   const { token } = await createApiTokenForEmail(engineer.email, `load ${new Date().toISOString()}`)
-  return { projectId: project.id, calcId: row.calcId, revisionId: row.revisionId, cookie: `${lucia.sessionCookieName}=${session.id}`, token }
+  return { projectId: project.id, calcId: row.calcId, revisionId: row.revisionId, issued: issued ?? null, cookie: `${lucia.sessionCookieName}=${session.id}`, token }
 }
 
 const pct = (sorted: number[], p: number) => (sorted.length ? sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)] : NaN)
@@ -93,6 +101,7 @@ const all = {
   register: () => run('register API', base, bearer),
   calc: () => run('calc page', `/projects/${f.projectId}/calcs/${f.calcId}`, { cookie: f.cookie }),
   pdf: () => run('stored PDF (A4)', `${base}/${f.calcId}/revisions/${f.revisionId}/pdf`, bearer),
+  issued: async () => (f.issued ? run('stored PDF (A4), issued revision', `${base}/${f.issued.calcId}/revisions/${f.issued.revisionId}/pdf`, bearer) : null),
   heavy: async () => {
     // One heavy job at a time (a Letter PDF is rendered on request) beside the register load.
     let stop = false

@@ -12,7 +12,7 @@ import { stripControl } from '@/lib/schemas/clean-text'
 import type { ProjectRole } from '@/lib/review/roles'
 import { STATES, SUBMIT, transitionOf, type TransitionAction, type TransitionSpec } from '@/lib/review/workflow'
 import type { Paper } from '@/reports/types'
-import { authoriseCalc, type Caller } from './access'
+import { authorise, authoriseCalc, type Caller } from './access'
 import { pendingAttachmentRows } from './attachments'
 import { bodyKey, type RevisionDeps } from './package-deps'
 import { enqueueRender, kickRenderRunner } from './render-jobs'
@@ -301,19 +301,46 @@ const STORED_PDF_STATES: readonly Revision['state'][] = ['in-check', 'checked', 
  * revision. The stored record stays as it was signed.
  */
 export async function revisionPdf(caller: Caller | null, projectId: string, calcId: string, revisionId: string, paper: Paper, deps: RevisionDeps) {
-  const { project, caller: who } = await authoriseCalc(caller, projectId, calcId, 'pdf.download')
-  const { calc, revision: rev } = await getRevision(who, projectId, calcId, revisionId)
-  if (!rev.pdfKey) throw new AppError('conflict', `The package of revision ${rev.label} is still being prepared; try again in a moment.`)
+  const { project, caller: who } = await authorise(caller, projectId, 'pdf.download')
+  // Only the columns a download needs, with the calc's project in the WHERE clause: the calc's working
+  // result and the revision's inputs and result (hundreds of kB of JSON each) stay in the database.
+  const [row] = await db
+    .select({ id: revisions.id, calcId: revisions.calcId, label: revisions.label, state: revisions.state, pdfKey: revisions.pdfKey, pdfHash: revisions.pdfHash, verificationCode: revisions.verificationCode, number: calcs.number })
+    .from(revisions)
+    .innerJoin(calcs, eq(calcs.id, revisions.calcId))
+    .where(and(eq(revisions.id, revisionId), eq(revisions.calcId, calcId), eq(calcs.projectId, projectId)))
+  // Not found: the full lookup says which of the two is missing, as before.
+  if (!row) await getRevision(who, projectId, calcId, revisionId)
+  if (!row) throw new AppError('not_found', 'No such revision.')
+  if (!row.pdfKey) throw new AppError('conflict', `The package of revision ${row.label} is still being prepared; try again in a moment.`)
   let bytes: Uint8Array
-  if (paper === 'A4' && STORED_PDF_STATES.includes(rev.state)) {
-    bytes = await deps.store.get(rev.pdfKey)
-    if (sha256Hex(bytes) !== rev.pdfHash) throw new Error(`stored PDF of revision ${rev.id} does not match its hash`)
+  if (paper === 'A4' && STORED_PDF_STATES.includes(row.state)) {
+    bytes = await deps.store.get(row.pdfKey)
+    if (sha256Hex(bytes) !== row.pdfHash) throw new Error(`stored PDF of revision ${row.id} does not match its hash`)
   } else {
+    const { calc, revision: rev } = await getRevision(who, projectId, calcId, revisionId)
     bytes = await stamp(rev, await revisionsOf(calc.id), deps, undefined, paper)
   }
-  if (STATES[rev.state].sealed) {
-    await audit({ userId: who.id, action: 'pdf.downloaded', projectId, calcId: calc.id, detail: { revisionId: rev.id, paper, state: rev.state } })
+  if (STATES[row.state].sealed && !downloadRecentlyAudited(who.id, row.id, paper)) {
+    await audit({ userId: who.id, action: 'pdf.downloaded', projectId, calcId: row.calcId, detail: { revisionId: row.id, paper, state: row.state } })
   }
-  const filename = `${project.code}_${calc.number}_rev${rev.label}_${paper}.pdf`.replace(/[^A-Za-z0-9._-]/g, '_')
-  return { bytes, filename, revision: rev }
+  const filename = `${project.code}_${row.number}_rev${row.label}_${paper}.pdf`.replace(/[^A-Za-z0-9._-]/g, '_')
+  return { bytes, filename, revision: row }
+}
+
+/**
+ * Downloads of a sealed record are audited once per person, revision and paper per minute (per
+ * instance): who took a copy and when stays on record to the minute, while a burst of downloads
+ * (a script, a reload, 50 at once) does not queue one audit write each behind SQLite's writer.
+ */
+const DOWNLOAD_AUDIT_MS = 60_000
+const lastDownloadAudit = new Map<string, number>()
+function downloadRecentlyAudited(userId: string, revisionId: string, paper: Paper): boolean {
+  const now = Date.now()
+  const key = `${userId}\u0000${revisionId}\u0000${paper}`
+  const last = lastDownloadAudit.get(key)
+  if (last !== undefined && now - last < DOWNLOAD_AUDIT_MS) return true
+  if (lastDownloadAudit.size > 10_000) for (const [k, t] of lastDownloadAudit) if (now - t >= DOWNLOAD_AUDIT_MS) lastDownloadAudit.delete(k)
+  lastDownloadAudit.set(key, now)
+  return false
 }
