@@ -28,6 +28,13 @@ function roundTo(x: number, step: number, dir: Direction): number {
   return r * step
 }
 
+/**
+ * x / 10^e and m · 10^e for a power of ten: 10^e itself underflows to 0 below 10⁻³⁰⁷, which turned the
+ * smallest doubles (5e-324) into NaN; there the power is applied in two steps.
+ */
+const divPow10 = (x: number, e: number): number => (e < -300 ? (x * 1e20) / 10 ** (e + 20) : x / 10 ** e)
+const mulPow10 = (m: number, e: number): number => (e < -300 ? (m * 10 ** (e + 20)) / 1e20 : m * 10 ** e)
+
 /** Decimal places shown for |x| (0 from 1000 up). */
 function decimalsOf(x: number): number {
   const a = Math.abs(x)
@@ -40,7 +47,7 @@ export function roundShown(x: number, dir: Direction = 'nearest'): number {
   if (!Number.isFinite(x) || x === 0) return x
   if (Math.abs(x) < SMALL) {
     const e = Math.floor(Math.log10(Math.abs(x)))
-    return Number((roundTo(x / 10 ** e, 10 ** -(SIGNIFICANT - 2), dir) * 10 ** e).toPrecision(SIGNIFICANT - 1))
+    return Number(mulPow10(roundTo(divPow10(x, e), 10 ** -(SIGNIFICANT - 2), dir), e).toPrecision(SIGNIFICANT - 1))
   }
   let d = decimalsOf(x)
   let r = roundTo(x, 10 ** -d, dir)
@@ -71,7 +78,7 @@ export function formatNumber(x: number, dir: Direction = 'nearest'): string {
   const sign = r < 0 ? MINUS : ''
   if (Math.abs(r) < SMALL) {
     const e = Math.floor(Math.log10(Math.abs(r)))
-    const m = Number((Math.abs(r) / 10 ** e).toPrecision(SIGNIFICANT - 1))
+    const m = Number(divPow10(Math.abs(r), e).toPrecision(SIGNIFICANT - 1))
     return `${sign}${m}×10${[...String(e)].map((c) => SUPER[c]).join('')}`
   }
   return sign + digitsOf(r, true)
@@ -85,7 +92,7 @@ export function texNumber(x: number, dir: Direction = 'nearest'): string {
   const sign = r < 0 ? '-' : ''
   if (Math.abs(r) < SMALL) {
     const e = Math.floor(Math.log10(Math.abs(r)))
-    const m = Number((Math.abs(r) / 10 ** e).toPrecision(SIGNIFICANT - 1))
+    const m = Number(divPow10(Math.abs(r), e).toPrecision(SIGNIFICANT - 1))
     return `${sign}${m} \\times 10^{${e}}`
   }
   return sign + digitsOf(r, false)

@@ -107,3 +107,27 @@ describe('edges, by hand', () => {
     expect(formatNumber(1e-20)).toBe('1×10⁻²⁰')
   })
 })
+
+describe('the smallest doubles', () => {
+  // 10^e underflows to 0 below 10⁻³⁰⁷ (IEEE 754 binary64: least normal 2.2·10⁻³⁰⁸, least subnormal 4.94·10⁻³²⁴
+  // — common practice), which made the formatter print "NaN" for them (bug found by the linkage property test:
+  // a crank pivot offset of 5e-324 mm printed as "e = NaN mm").
+  it('are printed as a power of ten, not NaN', () => {
+    expect(formatNumber(5e-324)).toBe('4.94×10⁻³²⁴')
+    expect(formatNumber(-5e-324)).toBe('\u22124.94×10⁻³²⁴')
+    expect(texNumber(5e-324)).toBe('4.94 \\times 10^{-324}')
+    expect(formatNumber(2.5e-310)).toBe('2.5×10⁻³¹⁰')
+    expect(roundShown(5e-324, 'up')).toBe(5e-324)
+    expect(roundShown(2.5e-310)).toBeCloseTo(2.5e-310, 320)
+  })
+  it('no finite number prints as NaN or Infinity', () => {
+    fc.assert(
+      fc.property(fc.double({ noNaN: true, noDefaultInfinity: true }), fc.constantFrom('nearest', 'up', 'down') as fc.Arbitrary<'nearest' | 'up' | 'down'>, (x, dir) => {
+        expect(formatNumber(x, dir)).not.toMatch(/NaN|Infinity|n\/a/)
+        expect(texNumber(x, dir)).not.toMatch(/NaN|Infinity|n\/a/)
+        expect(Number.isFinite(roundShown(x, dir))).toBe(true)
+      }),
+      { numRuns: 500 },
+    )
+  })
+})
