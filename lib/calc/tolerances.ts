@@ -40,6 +40,22 @@ function topContributions(table: Table, shown = 10): Table {
   return { ...table, title: `${table.title} (the ${shown} largest of ${table.rows.length})`, rows: table.rows.slice(0, shown) }
 }
 
+/** The Monte Carlo histogram as data for the package's figure (not printed as a table): one row per bin, and the limit. */
+function histogramTable(bins: { centre: number; width: number; count: number }[], limit: number): Table {
+  return {
+    id: 'tol.histogram',
+    section: 'tolerance',
+    title: 'Straightness deviation of the built mechanisms (Monte Carlo)',
+    columns: [
+      { key: 'from', label: 'from', unit: 'mm' },
+      { key: 'to', label: 'to', unit: 'mm' },
+      { key: 'count', label: 'samples' },
+      { key: 'limit', label: 'limit', unit: 'mm' },
+    ],
+    rows: bins.map((b) => ({ from: b.centre - b.width / 2, to: b.centre + b.width / 2, count: b.count, limit })),
+  }
+}
+
 export function withTolerances(mech: MechanismResult, input: Inputs, checks: ChecksInput | null): Outcome {
   const opts = input.tolerances
   if (!opts || !mech.feasibility.ok || !mech.workingRange) return { ok: true, result: mech }
@@ -72,7 +88,7 @@ export function withTolerances(mech: MechanismResult, input: Inputs, checks: Che
         criteria: [...(mech.criteria ?? []), criterion],
         // The ideal line is proved in the kinematics, and the RSS figure is an estimate beside the Monte Carlo run: both support.
         steps: [...mech.steps, ...t.steps.map((x) => (x.id === 'tol.ideal' || x.id === 'tol.rss' ? { ...x, appendix: true } : x))],
-        tables: [...mech.tables, topContributions(t.table)],
+        tables: [...mech.tables, topContributions(t.table), ...(t.histogram.length ? [histogramTable(t.histogram, input.straightnessTolerance)] : [])],
       },
     }
   } catch (err) {

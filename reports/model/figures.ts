@@ -2,6 +2,7 @@
 import { reportPartsOf } from '../mechanisms'
 import type { ReportContext } from './context'
 import { mechanismScene, type DiagramAt } from './diagram'
+import { histogramScene } from './histogram'
 import { PLOT_TITLE, plotScene, type PlotKind } from './plots'
 import type { Scene } from './scene'
 import { CHART_ALL_UP_TO, utilisationScene } from './utilisation'
@@ -32,6 +33,10 @@ export function diagramFigure(ctx: ReportContext, at: string | undefined, captio
 export function plotFigure(ctx: ReportContext, kind: string, caption: string | undefined, ordinal?: string): FigureView | null {
   const name = label(ctx, ordinal)
   if (!name) return null
+  if (kind === 'tolerance') {
+    const scene = histogramScene(ctx.pkg.result, ctx.figureWidth)
+    return scene ? { scene, label: name, caption: caption ?? 'Straightness deviation of the built mechanisms in the Monte Carlo run (tolerances and pin clearance); dashed: the straightness tolerance.' } : null
+  }
   if (kind !== 'links' && kind !== 'pins' && kind !== 'torque' && kind !== 'kinematics') return null
   const scene = plotScene(ctx.pkg.result, kind as PlotKind, ctx.figureWidth)
   if (!scene) return null

@@ -21,7 +21,8 @@ function has(result: ReportResult, stepSections: Set<string>, id: string, what: 
   return true
 }
 
-function figureHas(result: ReportResult, component: string): boolean {
+function figureHas(result: ReportResult, component: string, kind?: string): boolean {
+  if (component === 'Plot' && kind === 'tolerance') return (result.tables ?? []).some((t) => t.id === 'tol.histogram')
   if (component === 'Figure') return (result.positions?.length ?? 0) > 0 && (result.links?.length ?? 0) > 0
   if (component === 'Plot') return has(result, new Set(), '', 'positions')
   if (component === 'UtilisationChart') return (result.checks?.length ?? 0) > 0
@@ -37,7 +38,7 @@ export function numberOutline(outline: Outline, result: ReportResult): Numbering
   })
   let f = 0
   const figure = outline.figures.map((fig) =>
-    (fig.section < 0 || section[fig.section] !== null) && figureHas(result, fig.component) ? ++f : null,
+    (fig.section < 0 || section[fig.section] !== null) && figureHas(result, fig.component, fig.kind) ? ++f : null,
   )
   return { section, figure, backMatterStart: n + 1 }
 }
