@@ -15,14 +15,14 @@ const NEAR = 1 - 1e-9
 
 /**
  * Position t in `at` of the first longest vector (flat index at[t]). −1 when
- * `at` is empty or a value is NaN, infinite, or so large or small that its
+ * (Vector i at f[base + 2i], f[base + 2i + 1].) `at` is empty or a value is NaN, infinite, or so large or small that its
  * square leaves the safe range: the caller then runs its plain Math.hypot
  * scan, which defines the result in those cases.
  */
-export function firstLongest(f: Float64Array, at: ArrayLike<number>): number {
+export function firstLongest(f: Float64Array, at: ArrayLike<number>, base = 0): number {
   let top = 0
   for (let t = 0; t < at.length; t++) {
-    const i = 2 * at[t]
+    const i = base + 2 * at[t]
     const q = f[i] * f[i] + f[i + 1] * f[i + 1]
     if (!(q < Infinity)) return -1
     if (q > top) top = q
@@ -32,7 +32,7 @@ export function firstLongest(f: Float64Array, at: ArrayLike<number>): number {
   let best = -1
   let bestLen = 0
   for (let t = 0; t < at.length; t++) {
-    const i = 2 * at[t]
+    const i = base + 2 * at[t]
     if (f[i] * f[i] + f[i + 1] * f[i + 1] < near) continue
     const len = Math.hypot(f[i], f[i + 1])
     if (best < 0 || len > bestLen) {

@@ -1,6 +1,7 @@
 import { firstLongest } from './longest'
 import { linkLength, type LinkageModel } from './model'
 import type { CaseLoads, CaseStatics } from './statics'
+import type { Vec } from './vec'
 
 /** Internal forces of one link at one position, from its end forces. */
 export interface MemberForces {
@@ -27,17 +28,41 @@ export interface MemberForces {
  * the shear V(x) = Σ fᵢ·n + w·n x vanishes inside a segment.
  */
 export function memberForces(model: LinkageModel, pts: Float64Array, b: number, loads: CaseLoads, st: CaseStatics): MemberForces {
+  const out = new Float64Array(MEMBER_FIELDS)
+  memberForcesInto(model, pts, b, loads.weightPerMm, st.endForces, 0, st.torque, out, 0)
+  return { axialMid: out[0], axialMax: out[1], axialMin: out[2], moment: out[3], eye: out[4], eyeAt: out[5], across: out[6] }
+}
+
+/** Numbers memberForcesInto writes per link: axialMid, axialMax, axialMin, moment, eye, eyeAt, across. */
+export const MEMBER_FIELDS = 7
+
+/**
+ * memberForces into a flat array (the fields in MemberForces order at out[at …]), from end forces
+ * stored at f[fo …] in the model's flat point layout: the sweep keeps them per position in one array.
+ */
+export function memberForcesInto(
+  model: LinkageModel,
+  pts: Float64Array,
+  b: number,
+  w: Vec | null,
+  f: Float64Array,
+  fo: number,
+  torque: number,
+  out: Float64Array,
+  at: number,
+): void {
   const link = model.links[b]
   const o = 2 * model.offset[b]
-  const last = o + 2 * (link.points.length - 1)
+  const np = link.points.length
+  const last = o + 2 * (np - 1)
   const len = linkLength(link)
   const ex = (pts[last] - pts[o]) / len
   const ey = (pts[last + 1] - pts[o + 1]) / len
-  const w = loads.weightPerMm
   const we = w ? w.x * ex + w.y * ey : 0
   const wn = w ? -w.x * ey + w.y * ex : 0
-  const couple = b === model.crankIndex ? st.torque : 0
-  const f = st.endForces
+  const couple = b === model.crankIndex ? torque : 0
+  const stations = link.stations
+  const g = fo + o
   let fe = 0 // Σ fᵢ·e before the cut
   let fn = 0 // Σ fᵢ·n before the cut
   let sfn = 0 // Σ sᵢ fᵢ·n before the cut
@@ -45,11 +70,11 @@ export function memberForces(model: LinkageModel, pts: Float64Array, b: number, 
   let axialMax = -Infinity
   let axialMin = Infinity
   let moment = 0
-  for (let k = 0; k < link.points.length - 1; k++) {
-    const fx = f[o + 2 * k]
-    const fy = f[o + 2 * k + 1]
-    const s0 = link.stations[k]
-    const s1 = link.stations[k + 1]
+  for (let k = 0; k < np - 1; k++) {
+    const fx = f[g + 2 * k]
+    const fy = f[g + 2 * k + 1]
+    const s0 = stations[k]
+    const s1 = stations[k + 1]
     const fek = fx * ex + fy * ey
     const fnk = -fx * ey + fy * ex
     fe += fek
@@ -71,9 +96,9 @@ export function memberForces(model: LinkageModel, pts: Float64Array, b: number, 
   let eye = 0
   let eyeAt = 0
   let across = 0
-  for (let k = 0; k < link.points.length; k++) {
-    const fx = f[o + 2 * k]
-    const fy = f[o + 2 * k + 1]
+  for (let k = 0; k < np; k++) {
+    const fx = f[g + 2 * k]
+    const fy = f[g + 2 * k + 1]
     const m = Math.hypot(fx, fy)
     if (m > eye) {
       eye = m
@@ -81,7 +106,13 @@ export function memberForces(model: LinkageModel, pts: Float64Array, b: number, 
     }
     across = Math.max(across, Math.abs(-fx * ey + fy * ex))
   }
-  return { axialMid: -feMid - (we * len) / 2, axialMax, axialMin, moment, eye, eyeAt, across }
+  out[at] = -feMid - (we * len) / 2
+  out[at + 1] = axialMax
+  out[at + 2] = axialMin
+  out[at + 3] = moment
+  out[at + 4] = eye
+  out[at + 5] = eyeAt
+  out[at + 6] = across
 }
 
 type ForceRec = { x: number; y: number; magnitude: number }

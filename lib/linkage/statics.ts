@@ -54,7 +54,7 @@ export function staticsWorkspace(model: LinkageModel, caseCount: number): Static
 }
 
 /** Flat index of a joint on the body that receives loads applied there (−1: a ground joint). */
-function loadPoint(model: LinkageModel, joint: string): number {
+export function loadPoint(model: LinkageModel, joint: string): number {
   const b = model.primary[joint]
   return b < 0 ? -1 : model.offset[b] + model.links[b].points.indexOf(joint)
 }
@@ -67,23 +67,7 @@ export function solveStatics(model: LinkageModel, pts: Float64Array, cases: Case
   const n = model.size
   if (ws && ws.rhs.length !== cases.length) throw new Error(`statics workspace holds ${ws.rhs.length} load cases, not ${cases.length}`)
   const a = equilibriumMatrix(model, pts, ws?.a)
-  const rhs = cases.map((lc, q) => {
-    const b = ws ? ws.rhs[q].fill(0) : new Float64Array(n)
-    for (const p of lc.pointLoads) {
-      const i = loadPoint(model, p.joint)
-      if (i >= 0) applyLoad(model, pts, b, model.primary[p.joint], pts[2 * i], pts[2 * i + 1], p.force.x, p.force.y)
-    }
-    const w = lc.weightPerMm
-    if (w) {
-      model.links.forEach((l, body) => {
-        const len = linkLength(l)
-        const o = 2 * model.offset[body]
-        const e = o + 2 * (l.points.length - 1)
-        applyLoad(model, pts, b, body, (pts[o] + pts[e]) / 2, (pts[o + 1] + pts[e + 1]) / 2, w.x * len, w.y * len)
-      })
-    }
-    return b
-  })
+  const rhs = cases.map((lc, q) => loadsInto(model, pts, lc, ws ? ws.rhs[q].fill(0) : new Float64Array(n)))
   const out = solveInPlace(a, n, rhs, undefined, ws?.solver)
   if (!out.ok) return { ok: false, minPivot: out.minPivot }
   const largestConnection = rhs.map((x) => {
@@ -97,6 +81,24 @@ export function solveStatics(model: LinkageModel, pts: Float64Array, cases: Case
   return { ok: true, minPivot: out.minPivot, cases: detail, largestConnection }
 }
 
+/** The right-hand side of one load case (b zeroed by the caller): A·x + F = 0. */
+export function loadsInto(model: LinkageModel, pts: Float64Array, lc: CaseLoads, b: Float64Array): Float64Array {
+  for (const p of lc.pointLoads) {
+    const i = loadPoint(model, p.joint)
+    if (i >= 0) applyLoad(model, pts, b, model.primary[p.joint], pts[2 * i], pts[2 * i + 1], p.force.x, p.force.y)
+  }
+  const w = lc.weightPerMm
+  if (w) {
+    model.links.forEach((l, body) => {
+      const len = linkLength(l)
+      const o = 2 * model.offset[body]
+      const e = o + 2 * (l.points.length - 1)
+      applyLoad(model, pts, b, body, (pts[o] + pts[e]) / 2, (pts[o + 1] + pts[e + 1]) / 2, w.x * len, w.y * len)
+    })
+  }
+  return b
+}
+
 /** Moves an external force on `body` at (x, y) to the right-hand side: A·x + F = 0. */
 function applyLoad(model: LinkageModel, pts: Float64Array, b: Float64Array, body: number, x: number, y: number, fx: number, fy: number): void {
   const o = 2 * model.offset[body]
@@ -107,14 +109,23 @@ function applyLoad(model: LinkageModel, pts: Float64Array, b: Float64Array, body
 
 function endForces(model: LinkageModel, loads: CaseLoads, x: Float64Array, into?: Float64Array): CaseStatics {
   const f = into ?? new Float64Array(2 * model.pointCount)
+  endForcesInto(model, loads, x, f, 0)
+  return { endForces: f, torque: x[model.size - 1] * model.lc }
+}
+
+/**
+ * Adds the end forces of solution x (and the case's point loads) into f[fo …], which the caller
+ * zeroed, in the model's flat point layout. The drive torque is x[size − 1]·lc.
+ */
+export function endForcesInto(model: LinkageModel, loads: CaseLoads, x: Float64Array, f: Float64Array, fo: number): void {
   const conns = model.connections
   for (let i = 0; i < conns.length; i++) {
     const c = conns[i]
-    const s = 2 * (model.offset[c.body] + model.connBodyK[i])
+    const s = fo + 2 * (model.offset[c.body] + model.connBodyK[i])
     f[s] += x[2 * i]
     f[s + 1] += x[2 * i + 1]
     if (c.other >= 0) {
-      const o = 2 * (model.offset[c.other] + model.connOtherK[i])
+      const o = fo + 2 * (model.offset[c.other] + model.connOtherK[i])
       f[o] -= x[2 * i]
       f[o + 1] -= x[2 * i + 1]
     }
@@ -122,11 +133,10 @@ function endForces(model: LinkageModel, loads: CaseLoads, x: Float64Array, into?
   for (const p of loads.pointLoads) {
     const i = loadPoint(model, p.joint)
     if (i >= 0) {
-      f[2 * i] += p.force.x
-      f[2 * i + 1] += p.force.y
+      f[fo + 2 * i] += p.force.x
+      f[fo + 2 * i + 1] += p.force.y
     }
   }
-  return { endForces: f, torque: x[model.size - 1] * model.lc }
 }
 
 /**
@@ -135,20 +145,25 @@ function endForces(model: LinkageModel, loads: CaseLoads, x: Float64Array, into?
  * matrix, so it also catches a wrong bookkeeping of the results.
  */
 export function equilibriumResidual(model: LinkageModel, pts: Float64Array, loads: CaseLoads, st: CaseStatics): number {
+  return equilibriumResidualAt(model, pts, loads.weightPerMm, st.endForces, 0, st.torque)
+}
+
+/** equilibriumResidual on end forces stored at f[fo …]. */
+export function equilibriumResidualAt(model: LinkageModel, pts: Float64Array, w: Vec | null, f: Float64Array, fo: number, torque: number): number {
   let worst = 0
-  const f = st.endForces
-  model.links.forEach((l, b) => {
+  const links = model.links
+  for (let b = 0; b < links.length; b++) {
+    const l = links[b]
     const o = 2 * model.offset[b]
     let fx = 0
     let fy = 0
-    let m = b === model.crankIndex ? st.torque : 0
+    let m = b === model.crankIndex ? torque : 0
     for (let k = 0; k < l.points.length; k++) {
       const i = o + 2 * k
-      fx += f[i]
-      fy += f[i + 1]
-      m += (pts[i] - pts[o]) * f[i + 1] - (pts[i + 1] - pts[o + 1]) * f[i]
+      fx += f[fo + i]
+      fy += f[fo + i + 1]
+      m += (pts[i] - pts[o]) * f[fo + i + 1] - (pts[i + 1] - pts[o + 1]) * f[fo + i]
     }
-    const w = loads.weightPerMm
     if (w) {
       const len = linkLength(l)
       const e = o + 2 * (l.points.length - 1)
@@ -157,6 +172,6 @@ export function equilibriumResidual(model: LinkageModel, pts: Float64Array, load
       m += ((pts[e] - pts[o]) / 2) * w.y * len - ((pts[e + 1] - pts[o + 1]) / 2) * w.x * len
     }
     worst = Math.max(worst, Math.abs(fx), Math.abs(fy), Math.abs(m) / model.lc)
-  })
+  }
   return worst
 }

@@ -52,3 +52,45 @@ export function virtualWorkTorque(
   }
   return { torque: -power, scale }
 }
+
+/**
+ * virtualWorkTorque on joint positions in flat arrays (x at 2i, y at 2i + 1, joints numbered by
+ * `index`), with the same arithmetic: the sweep keeps its positions flat. Writes torque and scale
+ * to out[0], out[1].
+ */
+export function virtualWorkInto(
+  model: LinkageModel,
+  before: Float64Array,
+  after: Float64Array,
+  index: Record<string, number>,
+  loads: CaseLoads,
+  out: Float64Array,
+): void {
+  const h = 2 * VW_STEP
+  let power = 0
+  let scale = 0
+  for (const p of loads.pointLoads) {
+    const i = 2 * index[p.joint]
+    const vx = (after[i] - before[i]) / h
+    const vy = (after[i + 1] - before[i + 1]) / h
+    power += p.force.x * vx + p.force.y * vy
+    scale += Math.hypot(p.force.x, p.force.y) * Math.hypot(vx, vy)
+  }
+  const w = loads.weightPerMm
+  if (w) {
+    for (const l of model.links) {
+      const i = 2 * index[l.points[0]]
+      const j = 2 * index[l.points[l.points.length - 1]]
+      const ax = (after[i] - before[i]) / h
+      const ay = (after[i + 1] - before[i + 1]) / h
+      const bx = (after[j] - before[j]) / h
+      const by = (after[j + 1] - before[j + 1]) / h
+      const vx = (ax + bx) / 2
+      const vy = (ay + by) / 2
+      power += linkLength(l) * (w.x * vx + w.y * vy)
+      scale += linkLength(l) * Math.hypot(w.x, w.y) * Math.hypot(vx, vy)
+    }
+  }
+  out[0] = -power
+  out[1] = scale
+}
