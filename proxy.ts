@@ -22,6 +22,8 @@ export function securityHeaders(nonce: string, opts: { https?: boolean; dev?: bo
     `img-src 'self' data: blob:`,
     `font-src 'self' data:`,
     `connect-src 'self'${opts.dev ? ' ws: wss:' : ''}`,
+    // The bench's calc runs in a Web Worker loaded from the app's own build assets.
+    `worker-src 'self'`,
     `object-src 'none'`,
     `base-uri 'self'`,
     `form-action 'self'`,

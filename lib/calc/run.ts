@@ -111,13 +111,18 @@ function verdictOf(result: MechanismResult, checks: CheckItem[], criteria: Crite
  * Runs the mechanism, then the checks on its force envelope. Bad component descriptions come back
  * as field errors (`joints.P.holeDiameter`), not as exceptions.
  */
-export function runCalc(input: CalcInput): { ok: true; result: CalcResult } | { ok: false; fieldErrors: Record<string, string> } {
+/** What a caller may follow while a calc runs: the Monte Carlo run reports samples done of total. */
+export interface RunOptions {
+  onProgress?: (done: number, total: number) => void
+}
+
+export function runCalc(input: CalcInput, opts: RunOptions = {}): { ok: true; result: CalcResult } | { ok: false; fieldErrors: Record<string, string> } {
   // A case at speed joins each static case when an operating speed is given (lib/calc/at-speed.ts).
   // So do the straightness under tolerances and clearance when asked for (lib/calc/tolerances.ts).
   const parsed = mechanismInputSchema.parse(input.mechanism)
   const speed = withOperatingSpeed(runMechanism(input.mechanism), parsed, input.checks)
   if (!speed.ok) return speed
-  const toleranced = withTolerances(speed.result, parsed, input.checks)
+  const toleranced = withTolerances(speed.result, parsed, input.checks, opts.onProgress)
   if (!toleranced.ok) return toleranced
   const mech = toleranced.result
   let checks: CheckItem[] = []
@@ -196,10 +201,10 @@ export function firstNonFinite(node: unknown, path = ''): string | null {
  * The answer is a result of finite numbers or field errors: a non-finite number (which the ranges
  * are there to prevent, tests/security/input-bounds.test.ts) is reported, never passed on.
  */
-export function calculate(raw: unknown): Calculated {
+export function calculate(raw: unknown, opts: RunOptions = {}): Calculated {
   const parsed = parseCalcInput(raw)
   if (!parsed.ok) return parsed
-  const run = runCalc(parsed.input)
+  const run = runCalc(parsed.input, opts)
   if (!run.ok) return run
   const bad = firstNonFinite(run.result)
   if (bad) return { ok: false, fieldErrors: { _form: `these inputs could not be calculated: the result holds a value that is not a finite number (${bad}); change the inputs, and report them if they look ordinary` } }

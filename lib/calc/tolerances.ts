@@ -56,7 +56,7 @@ function histogramTable(bins: { centre: number; width: number; count: number }[]
   }
 }
 
-export function withTolerances(mech: MechanismResult, input: Inputs, checks: ChecksInput | null): Outcome {
+export function withTolerances(mech: MechanismResult, input: Inputs, checks: ChecksInput | null, onProgress?: (done: number, total: number) => void): Outcome {
   const opts = input.tolerances
   if (!opts || !mech.feasibility.ok || !mech.workingRange) return { ok: true, result: mech }
   const model = toleranceModelFor(input.mechanism, input.geometry)
@@ -70,7 +70,7 @@ export function withTolerances(mech: MechanismResult, input: Inputs, checks: Che
       clearances: checks ? clearancesFromChecks(checksInputToSI(checks), model) : undefined,
       eyeForces: load ? eyeForcesFromLoad(model, mech.workingRange, load) : undefined,
       limit: input.straightnessTolerance,
-      monteCarlo: (opts.samples ?? DEFAULT_SAMPLES) > 0 ? { samples: opts.samples ?? DEFAULT_SAMPLES, seed: opts.seed ?? 1, distribution: opts.distribution ?? 'normal' } : undefined,
+      monteCarlo: (opts.samples ?? DEFAULT_SAMPLES) > 0 ? { samples: opts.samples ?? DEFAULT_SAMPLES, seed: opts.seed ?? 1, distribution: opts.distribution ?? 'normal', onProgress } : undefined,
     })
     const worst = t.worstCase.confirmed
     const criterion: Criterion = {

@@ -41,6 +41,15 @@ describe('straightness as built in the calc', () => {
     expect(a).toBe(b)
   })
 
+  it('a long run reports its progress to whoever runs it (the bench worker shows it)', () => {
+    const seen: [number, number][] = []
+    const out = calculate({ ...lc3, operatingSpeed: undefined, tolerances: { samples: 5000 } }, { onProgress: (done, total) => seen.push([done, total]) })
+    expect(out.ok).toBe(true)
+    expect(seen.length).toBeGreaterThan(1)
+    expect(seen.at(-1)).toEqual([5000, 5000])
+    expect(seen.every(([d], i) => i === 0 || d > seen[i - 1][0])).toBe(true)
+  })
+
   it('bad tolerance inputs are refused at their field', () => {
     expect(run({ tolerances: { toleranceClass: 'x' } })).toMatchObject({ ok: false, fieldErrors: { 'tolerances.toleranceClass': expect.stringMatching(/f, m, c or v/) } })
     expect(run({ tolerances: { samples: 1e6 } })).toMatchObject({ ok: false, fieldErrors: { 'tolerances.samples': expect.stringMatching(/at most 20000/) } })

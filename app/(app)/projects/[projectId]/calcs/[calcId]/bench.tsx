@@ -1,7 +1,6 @@
 'use client'
 
-import { useCallback, useDeferredValue, useEffect, useMemo, useRef, useState } from 'react'
-import { benchCalculate } from '@/lib/bench/validate'
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react'
 import { parseDecimal } from '@/lib/bench/number'
 import type { CalcResult } from '@/lib/calc/run'
 import type { MechanismId as CalcType } from '@/lib/mechanisms'
@@ -13,8 +12,9 @@ import { KeyResults, type RevisionSummary } from './key-results'
 import { MechanismDrawing } from './mechanism-drawing'
 import { Plots } from './plots'
 import { PositionsTable } from './positions-table'
-import { BASIS_FIELDS, FACTOR_FIELDS, geometryFields, LINK_FIELDS, OVERRIDE_FIELDS, PIN_FIELDS, SELF_WEIGHT_FIELDS, STROKE_FIELDS } from './input-fields'
+import { BASIS_FIELDS, FACTOR_FIELDS, geometryFields, LINK_FIELDS, OPERATING_SPEED_FIELDS, OVERRIDE_FIELDS, PIN_FIELDS, SELF_WEIGHT_FIELDS, STROKE_FIELDS, TOLERANCE_FIELDS } from './input-fields'
 import { getPath, setPath, type Tree } from './tree'
+import { useCalc } from './use-calc'
 import { showValue, storeValue } from './units'
 
 export interface BenchProps {
@@ -48,7 +48,7 @@ function complete(values: Tree): Tree {
 }
 
 function fieldPaths(calcType: CalcType, materials: readonly string[]): string[] {
-  const defs = [geometryFields(calcType), STROKE_FIELDS, ...Object.values(BASIS_FIELDS), FACTOR_FIELDS, PIN_FIELDS(materials), LINK_FIELDS(materials), SELF_WEIGHT_FIELDS, OVERRIDE_FIELDS(calcType)]
+  const defs = [geometryFields(calcType), STROKE_FIELDS, ...Object.values(BASIS_FIELDS), FACTOR_FIELDS, PIN_FIELDS(materials), LINK_FIELDS(materials), SELF_WEIGHT_FIELDS, OPERATING_SPEED_FIELDS, TOLERANCE_FIELDS, OVERRIDE_FIELDS(calcType)]
   return ['basis.kind', ...defs.flat().map((d) => d.path)]
 }
 
@@ -74,15 +74,16 @@ export function Bench(props: BenchProps) {
   const [restorable, setRestorable] = useState<{ inputs: Tree; at: number } | null>(null)
 
   const payload = useMemo(() => complete(inputs), [inputs])
-  const deferred = useDeferredValue(payload)
-  const outcome = useMemo(() => benchCalculate(deferred), [deferred])
+  // The calc runs in a Web Worker (use-calc.ts): a long run never freezes the page, and can be cancelled.
+  const calc = useCalc(payload)
+  const outcome = calc.outcome
   const lastGood = useRef<CalcResult | null>(null)
   if (outcome.ok) lastGood.current = outcome.result
   const result = outcome.ok ? outcome.result : (outcome.result ?? lastGood.current)
   const json = JSON.stringify(payload)
   const dirty = json !== saved
   const hasParseErrors = Object.keys(parseErrors).length > 0
-  const valid = outcome.ok && !hasParseErrors && deferred === payload
+  const valid = outcome.ok && !hasParseErrors && calc.of === payload
 
   // A draft left in this browser by an earlier visit (unsaved, e.g. with an error) is offered back.
   useEffect(() => {
@@ -214,6 +215,10 @@ export function Bench(props: BenchProps) {
 
   const status = saving
     ? 'Saving…'
+    : calc.running
+      ? `Calculating…${calc.progress !== null ? ` ${Math.round(100 * calc.progress)} %` : ''}`
+    : calc.cancelled
+      ? 'Calculation cancelled: the results shown are for the inputs before; change an input to run again'
     : !dirty
       ? `Saved ${time(savedAt)}`
       : valid
@@ -240,8 +245,13 @@ export function Bench(props: BenchProps) {
         )}
       </div>
       {editable && (
-        <p className={`text-xs ${dirty && !valid ? 'text-fail' : 'text-ink/80'}`} role="status" data-testid="save-status">
+        <p className={`flex items-center gap-2 text-xs ${dirty && !valid && !calc.running && !calc.cancelled ? 'text-fail' : 'text-ink/80'}`} role="status" data-testid="save-status">
           {status}
+          {calc.running && (
+            <button type="button" className="underline" onClick={calc.cancel}>
+              Cancel
+            </button>
+          )}
         </p>
       )}
       {alert && (
