@@ -1,5 +1,5 @@
 import type { InversorCell } from './cells/cell'
-import { envelopeOf } from './envelope'
+import { envelopeOfArrays } from './envelope'
 import { assessGeometry, type StrokeRange } from './geometry'
 import { straightness } from './kinematic-checks'
 import { placeAt } from './crank'
@@ -10,7 +10,7 @@ import { geometrySteps } from './report/geometry-steps'
 import { sweepSteps } from './report/sweep-steps'
 import { sweepTables } from './report/tables'
 import type { LinkageResult, Step } from '@/lib/contract'
-import { runSweep, type LoadInput } from './sweep'
+import { sampleObjects, sweepArrays, type LoadInput } from './sweep'
 import { plain, tex } from './tex'
 import type { Criterion } from '@/lib/contract'
 import { DEG } from './vec'
@@ -128,14 +128,16 @@ export function analyse(input: AnalyseInput): AnalyseOutput {
   const perMm = sw ? sw.density * sw.area * 1e-9 * sw.g : 0
   const weightPerMm = sw ? { x: perMm * Math.cos(sw.directionDeg * DEG), y: perMm * Math.sin(sw.directionDeg * DEG) } : null
   const working = v.feasibility.ok ? workingRangeOf(input, v.usable) : null
-  const sweep = working
-    ? runSweep({ cell, crank: r, offset: e, anglesDeg: anglesOf(input, working), loads: input.loads, weightPerMm, amplificationLimit: input.amplificationLimit })
+  // The sweep computes in flat arrays; the envelopes read them, and the result's objects are built once, here.
+  const flat = working
+    ? sweepArrays({ cell, crank: r, offset: e, anglesDeg: anglesOf(input, working), loads: input.loads, weightPerMm, amplificationLimit: input.amplificationLimit })
     : null
+  const sweep = flat ? sampleObjects(flat, false) : null
   // The full range to the locked positions (kinematics only) and a dense sample of the working range.
   const kinematics = v.path ? kinematicSamples(cell, e, r, v.stroke.crankMinDeg, v.stroke.crankMaxDeg, KINEMATIC_SAMPLES) : []
   const dense = working ? kinematicSamples(cell, e, r, working.crankMinDeg, working.crankMaxDeg, 201) : []
   const slugs = sweep ? caseSlugs(sweep.cases.map((c) => c.name)) : []
-  const envelopes = sweep ? sweep.cases.map((c, i) => envelopeOf(sweep.model, c.name, c.samples, slugs[i])) : []
+  const envelopes = flat ? flat.cases.map((c, i) => envelopeOfArrays(flat, c, slugs[i])) : []
   const first = sweep?.cases[0]?.samples.map((s) => s.position) ?? []
   const ctx: ReportContext = {
     cell,

@@ -111,3 +111,140 @@ export function solveInPlace(a: Float64Array, n: number, rhs: Float64Array[], to
   }
   return { ok: true, minPivot }
 }
+
+/**
+ * Storage for solveMasked: the structural nonzeros of each row and of each column as bit masks
+ * (bit k of rowMask[r]: a[r, k] may be nonzero), kept up to date through row swaps and fill-in.
+ */
+export interface MaskScratch extends SolveScratch {
+  pattern: Int32Array
+  rowMask: Int32Array
+  colMask: Int32Array
+  /** The masks of the pattern itself, copied in at the start of every solve. */
+  rowMask0: Int32Array
+  colMask0: Int32Array
+}
+
+/** Largest n solveMasked handles: one bit per row or column in an int32. */
+export const MASKED_MAX = 31
+
+export const maskScratch = (n: number, pattern: Int32Array): MaskScratch => {
+  if (n > MASKED_MAX) throw new Error(`solveMasked handles up to ${MASKED_MAX} unknowns, not ${n}`)
+  const rowMask0 = new Int32Array(n)
+  const colMask0 = new Int32Array(n)
+  for (let t = 0; t < pattern.length; t++) {
+    const r = Math.floor(pattern[t] / n)
+    const c = pattern[t] - r * n
+    rowMask0[r] |= 1 << c
+    colMask0[c] |= 1 << r
+  }
+  return { ...solveScratch(n, pattern), pattern, rowMask: new Int32Array(n), colMask: new Int32Array(n), rowMask0, colMask0 }
+}
+
+/**
+ * solveInPlace with the same arithmetic, operation for operation, so the same bits: the same pivot
+ * (first largest |a[r, c]|), the same eliminations in the same order, the same back-substitution.
+ * What differs is only the bookkeeping: a sweep's matrix changes with position but its sparsity
+ * does not, so the rows and columns that can hold a nonzero are kept as bit masks (from the
+ * pattern, then through swaps and fill-in) and the searches visit those few entries instead of
+ * scanning whole columns. An entry outside the masks is exactly zero, which the scans of
+ * solveInPlace would skip or leave unchanged. Needs n ≤ MASKED_MAX and every nonzero of A in the
+ * scratch's pattern.
+ */
+export function solveMasked(a: Float64Array, n: number, rhs: Float64Array[], scratch: MaskScratch, tol = 1e-11): SolveOutcome {
+  const { cols, start, pattern, rowMask, colMask } = scratch
+  const scale = largestEntry(a, n, pattern)
+  if (scale === 0) return { ok: false, minPivot: 0 }
+  rowMask.set(scratch.rowMask0)
+  colMask.set(scratch.colMask0)
+  let used = 0
+  let minPivot = Infinity
+  const nr = rhs.length
+  for (let c = 0; c < n; c++) {
+    const above = ~((2 << c) - 1) // columns (or rows) after c
+    let best = c
+    let bestAbs = Math.abs(a[c * n + c])
+    let m = colMask[c] & above
+    while (m !== 0) {
+      const low = m & -m
+      m ^= low
+      const r = 31 - Math.clz32(low)
+      const v = Math.abs(a[r * n + c])
+      if (v > bestAbs) {
+        best = r
+        bestAbs = v
+      }
+    }
+    if (bestAbs / scale < minPivot) minPivot = bestAbs / scale
+    if (bestAbs <= tol * scale) return { ok: false, minPivot }
+    if (best !== c) {
+      const mc = rowMask[c]
+      const mb = rowMask[best]
+      // Columns ≥ c where either row may be nonzero: elsewhere both entries are 0 and the swap changes nothing.
+      let sw = (mc | mb) & ~((1 << c) - 1)
+      while (sw !== 0) {
+        const low = sw & -sw
+        sw ^= low
+        const k = 31 - Math.clz32(low)
+        const t = a[c * n + k]
+        a[c * n + k] = a[best * n + k]
+        a[best * n + k] = t
+        // Rows c and best trade places in column k's mask.
+        const cm = colMask[k]
+        const hasC = (cm >>> c) & 1
+        const hasB = (cm >>> best) & 1
+        if (hasC !== hasB) colMask[k] = cm ^ ((1 << c) | (1 << best))
+      }
+      rowMask[c] = mb
+      rowMask[best] = mc
+      for (let q = 0; q < nr; q++) {
+        const b = rhs[q]
+        const t = b[c]
+        b[c] = b[best]
+        b[best] = t
+      }
+    }
+    start[c] = used
+    const rowC = rowMask[c] & above
+    let cm = rowC
+    while (cm !== 0) {
+      const low = cm & -cm
+      cm ^= low
+      const k = 31 - Math.clz32(low)
+      if (a[c * n + k] !== 0) cols[used++] = k
+    }
+    const end = used
+    const piv = a[c * n + c]
+    let rows = colMask[c] & above
+    while (rows !== 0) {
+      const low = rows & -rows
+      rows ^= low
+      const r = 31 - Math.clz32(low)
+      const arc = a[r * n + c]
+      if (arc === 0) continue
+      const f = arc / piv
+      if (f === 0) continue
+      a[r * n + c] = 0
+      for (let t = start[c]; t < end; t++) a[r * n + cols[t]] -= f * a[c * n + cols[t]]
+      for (let q = 0; q < nr; q++) rhs[q][r] -= f * rhs[q][c]
+      // Fill-in: row r may now be nonzero wherever the pivot row is.
+      let fill = rowC & ~rowMask[r]
+      rowMask[r] |= rowC
+      while (fill !== 0) {
+        const lf = fill & -fill
+        fill ^= lf
+        colMask[31 - Math.clz32(lf)] |= low
+      }
+    }
+  }
+  start[n] = used
+  for (let q = 0; q < nr; q++) {
+    const b = rhs[q]
+    for (let r = n - 1; r >= 0; r--) {
+      let s = b[r]
+      for (let t = start[r]; t < start[r + 1]; t++) s -= a[r * n + cols[t]] * b[cols[t]]
+      b[r] = s / a[r * n + r]
+    }
+  }
+  return { ok: true, minPivot }
+}

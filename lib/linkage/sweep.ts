@@ -1,6 +1,6 @@
 import type { InversorCell } from './cells/cell'
 import { linkageOf, placeAt } from './crank'
-import { solveInPlace, solveScratch } from './dense'
+import { MASKED_MAX, maskScratch, solveInPlace, solveMasked, solveScratch } from './dense'
 import { equilibriumMatrix, equilibriumPattern } from './equations'
 import { firstLongest } from './longest'
 import { MEMBER_FIELDS, memberForcesInto, type MemberForces } from './members'
@@ -178,7 +178,9 @@ export function sweepArrays(input: SweepInput): SweepArrays {
   // Reused at every position.
   const a = new Float64Array(n * n)
   const rhs = solved.map(() => new Float64Array(n))
-  const scratch = solveScratch(n, equilibriumPattern(model))
+  const pattern = equilibriumPattern(model)
+  const masked = n <= MASKED_MAX ? maskScratch(n, pattern) : null
+  const scratch = solveScratch(n, pattern)
   const pts = new Float64Array(np)
   const before = new Float64Array(2 * nj)
   const after = new Float64Array(2 * nj)
@@ -198,7 +200,7 @@ export function sweepArrays(input: SweepInput): SweepArrays {
     }
     equilibriumMatrix(model, pts, a)
     for (let q = 0; q < solved.length; q++) loadsInto(model, pts, solved[q], rhs[q].fill(0))
-    if (!solveInPlace(a, n, rhs, undefined, scratch).ok) {
+    if (!(masked ? solveMasked(a, n, rhs, masked) : solveInPlace(a, n, rhs, undefined, scratch)).ok) {
       toggles.push({ crankDeg: deg, reason: 'singular' })
       continue
     }
@@ -308,7 +310,7 @@ export function positionAt(s: SweepArrays, c: CaseArrays, i: number, joints: Rec
   const nl = model.links.length
   const linkForces: Record<string, number> = {}
   const linkMoments: Record<string, number> = {}
-  const weighted = c.loads.weightPerMm !== null
+  const weighted = !!c.loads.weightPerMm
   for (let b = 0; b < nl; b++) {
     const l = model.links[b]
     const k = (i * nl + b) * MEMBER_FIELDS
@@ -348,14 +350,21 @@ export function positionAt(s: SweepArrays, c: CaseArrays, i: number, joints: Rec
 /** A case sample without its per-link internals: what the report and the result read. */
 export type PositionSample = Omit<CaseSample, 'members'>
 
+/** SweepOutput without the per-link internals. */
+export interface SweepPositions {
+  model: LinkageModel
+  cases: { name: string; samples: PositionSample[] }[]
+  toggles: ToggleFlag[]
+}
+
 /**
  * The objects of the stable output shape, built once from the flat sweep: per case, per kept
  * position, the PositionResult (the joints object shared by the cases, as each position places the
  * mechanism once) and the checks; with `members`, the per-link internals as well.
  */
 export function sampleObjects(s: SweepArrays, withMembers: true): SweepOutput
-export function sampleObjects(s: SweepArrays, withMembers: false): { model: LinkageModel; cases: { name: string; samples: PositionSample[] }[]; toggles: ToggleFlag[] }
-export function sampleObjects(s: SweepArrays, withMembers: boolean): { model: LinkageModel; cases: { name: string; samples: PositionSample[] }[]; toggles: ToggleFlag[] } {
+export function sampleObjects(s: SweepArrays, withMembers: false): SweepPositions
+export function sampleObjects(s: SweepArrays, withMembers: boolean): SweepPositions {
   const cases = s.cases.map((c) => ({ name: c.name, samples: new Array<CaseSample | PositionSample>(s.count) }))
   const names = s.model.links.map((l) => l.name)
   for (let i = 0; i < s.count; i++) {

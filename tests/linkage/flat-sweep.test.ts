@@ -2,7 +2,8 @@ import { describe, it, expect } from 'vitest'
 import { peaucellierCell } from '@/lib/linkage/cells/peaucellier'
 import { hartCell } from '@/lib/linkage/cells/hart'
 import type { InversorCell } from '@/lib/linkage/cells/cell'
-import { runSweep, type SweepInput } from '@/lib/linkage/sweep'
+import { runSweep, sampleObjects, sweepArrays, type SweepInput } from '@/lib/linkage/sweep'
+import { envelopeOf, envelopeOfArrays } from '@/lib/linkage/envelope'
 import { referenceSweep } from './_reference-sweep'
 
 /*
@@ -37,6 +38,17 @@ function compare(input: SweepInput): void {
   // toEqual tells 0 from −0 and compares NaN as equal; the JSON adds the key order.
   expect(fast).toEqual(ref)
   expect(JSON.stringify(fast.cases)).toBe(JSON.stringify(ref.cases))
+  // What analyse() reads: the envelopes straight from the arrays, and the samples without members.
+  const flat = sweepArrays(input)
+  flat.cases.forEach((c, i) => {
+    const env = envelopeOfArrays(flat, c, `slug-${i}`)
+    const refEnv = envelopeOf(ref.model, ref.cases[i].name, ref.cases[i].samples, `slug-${i}`)
+    expect(env).toEqual(refEnv)
+    expect(JSON.stringify(env)).toBe(JSON.stringify(refEnv))
+  })
+  const lean = sampleObjects(flat, false)
+  expect(lean.toggles).toEqual(ref.toggles)
+  lean.cases.forEach((c, i) => expect(c.samples).toEqual(ref.cases[i].samples.map(({ members: _, ...rest }) => rest)))
 }
 
 describe('flat sweep against the object-per-position sweep', () => {

@@ -1,7 +1,7 @@
 import type { InversorCell } from '../cells/cell'
 import type { GeometryVerdict } from '../geometry'
 import type { LoadCaseEnvelope, StrokeLimits } from '@/lib/contract'
-import type { LoadInput, SweepOutput } from '../sweep'
+import type { LoadInput, SweepPositions } from '../sweep'
 
 /** Everything the step and table builders read; they compute nothing new but checks. */
 export interface ReportContext {
@@ -13,7 +13,7 @@ export interface ReportContext {
   verdict: GeometryVerdict
   loads: LoadInput[]
   selfWeight: { density: number; area: number; g: number; perMm: number } | null
-  sweep: SweepOutput | null
+  sweep: SweepPositions | null
   envelopes: LoadCaseEnvelope[]
   straightness: number
   /** The crank range statics is solved over; null when the geometry is infeasible. */
