@@ -9,6 +9,7 @@ import type { CalcResult, CalcVerdict, CheckItem, Criterion, MaterialUse, Mechan
 import { basisText } from './basis-text'
 import { withOperatingSpeed } from './at-speed'
 import { withTolerances } from './tolerances'
+import { mechanismComparison } from './comparison'
 
 export type { CalcResult, CalcVerdict }
 
@@ -159,6 +160,10 @@ export function runCalc(input: CalcInput, opts: RunOptions = {}): { ok: true; re
   }
   const margin = input.mechanism.workingRange ? marginCriterion(mech, input.mechanism.toggleMarginDeg ?? 5) : null
   if (margin) criteria.unshift(margin)
+  // The approximate four-bars for the same stroke beside this cell, to justify the choice (lib/calc/comparison.ts).
+  const choice = mechanismComparison({ ...mech, steps }, input.mechanism.loads[0], required)
+  steps.push(...choice.steps)
+  tables.push(...choice.tables)
   const units = input.checks?.units ?? 'SI'
   return {
     ok: true,

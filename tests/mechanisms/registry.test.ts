@@ -80,7 +80,7 @@ describe('a test-only mechanism registered at run time', () => {
     // Numbered in the mechanism's declared order (statics before verification), the same numbers as stepOutline.
     const outline = stepOutline(pkg)
     const sections = [...new Set(outline.map((s) => s.section))]
-    expect(sections).toEqual(['geometry', 'kinematics', 'statics', 'verification', 'checks'])
+    expect(sections).toEqual(['geometry', 'kinematics', 'statics', 'verification', 'checks', 'comparison'])
     const shown = [...html.matchAll(/id="step-([^"]+)"[\s\S]*?class="inv-step-n"[^>]*>(\d+)</g)].map((m) => [m[1], Number(m[2])])
     expect(shown).toEqual(outline.map((s) => [s.id, s.number]))
   }, 120_000)

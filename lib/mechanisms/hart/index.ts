@@ -17,6 +17,6 @@ export const hart = defineMechanism({
   ],
   defaultGeometry: { long: 240, short: 100, ratio: 0.3, crank: 40, crankPivotOffset: 40 },
   // Statics before its verification: the template prints the load steps, then the checks of equilibrium.
-  stepSections: ['geometry', 'kinematics', 'statics', 'verification', 'dynamics', 'tolerance', 'checks'],
+  stepSections: ['geometry', 'kinematics', 'statics', 'verification', 'dynamics', 'tolerance', 'comparison', 'checks'],
   model: (g) => ({ cell: hartCell({ long: g.long, short: g.short, ratio: g.ratio }), crank: g.crank, offset: g.crankPivotOffset }),
 })

@@ -16,6 +16,6 @@ export const peaucellier = defineMechanism({
   ],
   defaultGeometry: { arm: 250, side: 100, crank: 100, crankPivotOffset: 100 },
   // Statics before its verification: the template prints the load steps, then the checks of equilibrium.
-  stepSections: ['geometry', 'kinematics', 'statics', 'verification', 'dynamics', 'tolerance', 'checks'],
+  stepSections: ['geometry', 'kinematics', 'statics', 'verification', 'dynamics', 'tolerance', 'comparison', 'checks'],
   model: (g) => ({ cell: peaucellierCell({ arm: g.arm, side: g.side }), crank: g.crank, offset: g.crankPivotOffset }),
 })

@@ -75,7 +75,7 @@ export const TEST_CELL = defineMechanism({
   defaultGeometry: { k: 52500, side: 100, crank: 100, crankPivotOffset: 100 },
   model: (g) => ({ cell: testCell(g.k, g.side), crank: g.crank, offset: g.crankPivotOffset }),
   // Its own numbering order: statics before the verification.
-  stepSections: ['geometry', 'kinematics', 'statics', 'verification', 'checks'],
+  stepSections: ['geometry', 'kinematics', 'statics', 'verification', 'checks', 'comparison'],
 })
 
 /** The schema is an ordinary zod schema: the registry needs nothing else. */

@@ -1,0 +1,35 @@
+/**
+ * "Choice of mechanism": the approximate straight-line four-bars (lib/fourbar) sized for the same
+ * stroke and load beside this calc's exact cell — its links, pins, footprint over the working range,
+ * straightness (as built when analysed, else ideal), largest pin force and drive torque.
+ */
+import type { CalcResult, Step, Table } from '@/lib/contract'
+import { compareStraightLineMechanisms, type ExactCellRow } from '@/lib/fourbar'
+import { mechanismLabel } from '@/lib/mechanisms'
+
+/** The comparison's steps (in the appendix: the table carries the figures) and table, or nothing when the calc has no solved positions. */
+export function mechanismComparison(result: Pick<CalcResult, 'mechanism' | 'feasibility' | 'positions' | 'steps' | 'links' | 'envelope' | 'straightness' | 'workingRange'>, load: { fx: number; fy: number }, requiredStroke?: number): { steps: Step[]; tables: Table[] } {
+  const positions = result.positions
+  if (!result.feasibility.ok || positions.length < 2) return { steps: [], tables: [] }
+  const ys = positions.map((p) => p.tracer.y)
+  const stroke = requiredStroke ?? Math.max(...ys) - Math.min(...ys)
+  const xs = positions.flatMap((p) => Object.values(p.joints).map((j) => j.x))
+  const yj = positions.flatMap((p) => Object.values(p.joints).map((j) => j.y))
+  const built = result.steps.find((s) => s.id === 'tol.worst-confirmed')
+  const exact: ExactCellRow = {
+    name: mechanismLabel(result.mechanism),
+    // The frame counts as a link, as for the four-bars.
+    links: result.links.length + 1,
+    pins: new Set(result.links.flatMap((l) => l.joints)).size,
+    footprint: { width: Math.max(...xs) - Math.min(...xs), height: Math.max(...yj) - Math.min(...yj) },
+    straightness: typeof built?.value === 'number' ? built.value : result.straightness,
+    straightnessBasis: built ? 'toleranced' : 'ideal',
+    // The first load case, statically, as the four-bars are loaded.
+    peakPinForce: Math.max(0, ...Object.values(result.envelope[0]?.pins ?? {}).map((p) => p.value)),
+    peakTorque: Math.abs(result.envelope[0]?.driveTorque.value ?? 0),
+    inputSpanDeg: result.workingRange ? result.workingRange.crankMaxDeg - result.workingRange.crankMinDeg : undefined,
+    stepId: built?.id,
+  }
+  const c = compareStraightLineMechanisms({ stroke, load, exactCells: [exact] })
+  return { steps: c.steps.map((s) => ({ ...s, appendix: true })), tables: [c.table] }
+}
