@@ -81,6 +81,8 @@ describe('edges, by hand', () => {
     expect(formatUtilisation(2.5)).toBe('2.500')
     expect(utilisationShown(1.0000001)).toBe(1.001)
     expect(utilisationShown(Number.NaN)).toBeNaN()
+    // not a number to round: returned as it is (a negative infinity is not clipped to 0)
+    expect(utilisationShown(Number.NEGATIVE_INFINITY)).toBe(Number.NEGATIVE_INFINITY)
   })
   it('and a met utilisation is never shown above the limit: the verdict allows 10⁻⁹ for binary noise', () => {
     // lib/checks/report.ts: met when u ≤ 1 + 10⁻⁹. A met 1.0000000005 printed as 1.001 beside "pass" was a bug.
