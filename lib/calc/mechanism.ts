@@ -86,6 +86,11 @@ const common = {
         .optional(),
       seed: num().int({ error: 'must be a whole number' }).min(0, { error: 'must not be negative' }).max(2 ** 31, { error: 'must be below 2³¹' }).optional(),
       distribution: z.enum(['normal', 'uniform'], { error: 'must be normal or uniform' }).optional(),
+      /** Per link or frame item: its own distribution in the Monte Carlo run. */
+      distributions: z
+        .record(z.string().max(20, { error: 'must be a link or frame name' }), z.enum(['normal', 'uniform'], { error: 'must be normal or uniform' }))
+        .refine((r) => Object.keys(r).length <= 50, { error: 'must list at most 50 items' })
+        .optional(),
     })
     .optional(),
 }

@@ -20,6 +20,8 @@ export interface ToleranceOptions {
   samples?: number
   seed?: number
   distribution?: 'normal' | 'uniform'
+  /** Per item: its own distribution. */
+  distributions?: Record<string, 'normal' | 'uniform'>
 }
 
 interface Inputs {
@@ -70,8 +72,10 @@ export function withTolerances(mech: MechanismResult, input: Inputs, checks: Che
       clearances: checks ? clearancesFromChecks(checksInputToSI(checks), model) : undefined,
       eyeForces: load ? eyeForcesFromLoad(model, mech.workingRange, load) : undefined,
       limit: input.straightnessTolerance,
-      monteCarlo: (opts.samples ?? DEFAULT_SAMPLES) > 0 ? { samples: opts.samples ?? DEFAULT_SAMPLES, seed: opts.seed ?? 1, distribution: opts.distribution ?? 'normal', onProgress } : undefined,
+      monteCarlo: (opts.samples ?? DEFAULT_SAMPLES) > 0 ? { samples: opts.samples ?? DEFAULT_SAMPLES, seed: opts.seed ?? 1, distribution: opts.distribution ?? 'normal', perItem: opts.distributions, onProgress } : undefined,
     })
+    const unknown = Object.keys(opts.distributions ?? {}).find((k) => !t.items.some((i) => i.id === k))
+    if (unknown) return { ok: false, fieldErrors: { [`tolerances.distributions.${unknown}`]: `no dimension "${unknown}"; the dimensions are ${t.items.filter((i) => i.kind !== 'clearance').map((i) => i.id).join(', ')}` } }
     const worst = t.worstCase.confirmed
     const criterion: Criterion = {
       id: 'toleranced-straightness',

@@ -35,6 +35,17 @@ describe('straightness as built in the calc', () => {
     expect(value(fine, 'tol.worst-confirmed')).toBeLessThan(worst)
   })
 
+  it('a length drawn uniformly instead of normally (t = 3σ) spreads the built mechanisms wider', () => {
+    // With OA the only tolerance, the deviation grows with |ΔOA|: the 99th percentile of |x| is 0.99 t for a
+    // uniform draw over ±t and 2.576 σ = 0.859 t for a normal one with t = 3σ (statistics; common practice).
+    const p99 = (d: 'normal' | 'uniform') => {
+      const lengths = { OA: 0.3, OB: 0, AP: 0, BP: 0, AT: 0, BT: 0, CP: 0, 'frame:OC': 0 }
+      const r = ok({ tolerances: { lengths, distributions: { OA: d }, samples: 4000 }, defaults: { ...lc3.defaults, joint: { ...lc3.defaults.joint, holeDiameter: lc3.defaults.joint.pinDiameter } } })
+      return value(r, 'tol.monte-carlo')
+    }
+    expect(p99('uniform')).toBeGreaterThan(p99('normal'))
+  })
+
   it('the same seed gives the same Monte Carlo figure', () => {
     const a = value(ok({ tolerances: { samples: 400, seed: 7 } }), 'tol.monte-carlo')
     const b = value(ok({ tolerances: { samples: 400, seed: 7 } }), 'tol.monte-carlo')
@@ -54,5 +65,6 @@ describe('straightness as built in the calc', () => {
     expect(run({ tolerances: { toleranceClass: 'x' } })).toMatchObject({ ok: false, fieldErrors: { 'tolerances.toleranceClass': expect.stringMatching(/f, m, c or v/) } })
     expect(run({ tolerances: { samples: 1e6 } })).toMatchObject({ ok: false, fieldErrors: { 'tolerances.samples': expect.stringMatching(/at most 20000/) } })
     expect(run({ tolerances: { lengths: { XY: 0.1 } } })).toMatchObject({ ok: false, fieldErrors: { 'tolerances.lengths.XY': expect.stringMatching(/no dimension "XY"/) } })
+    expect(run({ tolerances: { distributions: { XY: 'uniform' } } })).toMatchObject({ ok: false, fieldErrors: { 'tolerances.distributions.XY': expect.stringMatching(/no dimension "XY"/) } })
   })
 })

@@ -115,6 +115,7 @@ export const OVERRIDE_FIELDS = (calcType: CalcType): InputFieldDef[] => {
       { path: `links.${l}.section.width`, label: `${l}: width`, unit: 'mm', step: '0.5' },
       { path: `links.${l}.section.thickness`, label: `${l}: thickness`, unit: 'mm', step: '0.5' },
       { path: `links.${l}.eye.edgeAlong`, label: `${l}: eye end distance a`, unit: 'mm', step: '0.5' },
+      { path: `tolerances.lengths.${l}`, label: `${l}: length tolerance ±`, unit: 'mm', step: '0.01', hint: 'overrides the tolerance class' },
     ]),
   ]
 }
