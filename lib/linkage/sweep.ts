@@ -94,7 +94,15 @@ const PROBES: CaseLoads[] = [
 ]
 
 /** Every joint of the mechanism at crank angle θ into out (2 per joint, in `names` order); false out of reach. */
-function placeFlat(cell: InversorCell, e: number, r: number, th: number, names: string[], out: Float64Array, at: number): boolean {
+function placeFlat(cell: InversorCell, e: number, r: number, th: number, names: string[], out: Float64Array, at: number, flat: boolean): boolean {
+  if (flat) {
+    // crankPoint, then the cell's closed form straight into the array, then C = (e, 0).
+    if (!cell.placeInto!(e + r * Math.cos(th), r * Math.sin(th), out, at)) return false
+    const c = at + 2 * (names.length - 1)
+    out[c] = e
+    out[c + 1] = 0
+    return true
+  }
   const j = placeAt(cell, e, r, th)
   if (!j) return false
   for (let k = 0; k < names.length; k++) {
@@ -151,6 +159,8 @@ export function sweepArrays(input: SweepInput): SweepArrays {
   const toggles: ToggleFlag[] = []
   const names = jointOrder(cell, e, r, anglesDeg) ?? []
   const nj = names.length
+  // The cell's flat closed form when it has one and names the joints as place() does.
+  const flat = !!cell.placeInto && !!cell.joints && [...cell.joints, 'C'].join() === names.join()
   const index: Record<string, number> = {}
   names.forEach((nm, k) => (index[nm] = k))
   // Flat point i of the model sits at joint pointJoint[i].
@@ -189,7 +199,7 @@ export function sweepArrays(input: SweepInput): SweepArrays {
   for (const deg of anglesDeg) {
     const th = deg * DEG
     const jo = count * 2 * nj
-    if (!nj || !placeFlat(cell, e, r, th, names, joints, jo)) {
+    if (!nj || !placeFlat(cell, e, r, th, names, joints, jo, flat)) {
       toggles.push({ crankDeg: deg, reason: 'unreachable' })
       continue
     }
@@ -211,7 +221,7 @@ export function sweepArrays(input: SweepInput): SweepArrays {
     }
     const i = count
     crankDeg[i] = deg
-    const moved = placeFlat(cell, e, r, th - VW_STEP, names, before, 0) && placeFlat(cell, e, r, th + VW_STEP, names, after, 0)
+    const moved = placeFlat(cell, e, r, th - VW_STEP, names, before, 0, flat) && placeFlat(cell, e, r, th + VW_STEP, names, after, 0, flat)
     let min = Infinity
     for (let w = 0; w < nw; w++) {
       const [v, p, q] = tri[w]

@@ -4,6 +4,7 @@ import { hartCell } from '@/lib/linkage/cells/hart'
 import type { InversorCell } from '@/lib/linkage/cells/cell'
 import { runSweep, sampleObjects, sweepArrays, type SweepInput } from '@/lib/linkage/sweep'
 import { envelopeOf, envelopeOfArrays } from '@/lib/linkage/envelope'
+import { maskScratch, solveInPlace, solveMasked, solveScratch } from '@/lib/linkage/dense'
 import { referenceSweep } from './_reference-sweep'
 
 /*
@@ -62,4 +63,38 @@ describe('flat sweep against the object-per-position sweep', () => {
       compare({ cell, crank: r, offset: e, anglesDeg, loads: LOADS, weightPerMm: { x: 0.0003, y: -0.004 }, amplificationLimit: 3 })
     })
   }
+})
+
+describe('solveMasked against solveInPlace', () => {
+  // A seeded generator (mulberry32, common practice) so a failure can be replayed.
+  const rng = (seed: number) => () => {
+    seed = (seed + 0x6d2b79f5) | 0
+    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed)
+    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
+  }
+
+  it('same outcome, pivots and solution bits on sparse matrices with ties, exact zeros and singular ones', () => {
+    const next = rng(12)
+    for (let trial = 0; trial < 400; trial++) {
+      const n = 2 + Math.floor(next() * 29)
+      const nnz = Math.floor(n * (1.5 + next() * 2))
+      const at = new Set<number>()
+      for (let i = 0; i < n; i++) at.add(i * n + Math.floor(next() * n))
+      while (at.size < Math.min(nnz, n * n)) at.add(Math.floor(next() * n * n))
+      const pattern = Int32Array.from([...at].sort((x, y) => x - y))
+      const a = new Float64Array(n * n)
+      // Small integers give exact ties between candidate pivots; some pattern entries are exactly 0.
+      for (const p of pattern) a[p] = next() < 0.1 ? 0 : next() < 0.5 ? Math.round(next() * 6 - 3) : next() * 2 - 1
+      const rhs = () => [0, 1, 2].map(() => Float64Array.from({ length: n }, () => next() - 0.5))
+      const b1 = rhs()
+      const b2 = b1.map((b) => b.slice())
+      const a1 = a.slice()
+      const a2 = a.slice()
+      const ref = solveInPlace(a1, n, b1, 1e-11, solveScratch(n, pattern))
+      const got = solveMasked(a2, n, b2, maskScratch(n, pattern))
+      expect(got).toEqual(ref)
+      if (ref.ok) b1.forEach((b, q) => expect(Array.from(b2[q])).toEqual(Array.from(b)))
+    }
+  })
 })

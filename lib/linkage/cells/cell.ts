@@ -27,6 +27,12 @@ export interface InversorCell {
   links: LinkDef[]
   /** Every joint of the cell for a given P (O and T included); null outside the ring. */
   place(p: Vec): Record<string, Vec> | null
+  /**
+   * place() into a flat array, same arithmetic, no objects: joint k of `joints` (place()'s key
+   * order) at out[at + 2k], out[at + 2k + 1]; false outside the ring. For the sweep's hot loop.
+   */
+  placeInto?(px: number, py: number, out: Float64Array, at: number): boolean
+  joints?: string[]
   /** Angles watched for toggle: [vertex, one end, other end]; 0° means the two links are in line. */
   transmission: [string, string, string][]
   tex: { k: TexPair; rhoMin: TexPair; rhoMax: TexPair }

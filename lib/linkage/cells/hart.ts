@@ -69,6 +69,36 @@ export function hartCell(g: HartGeometry): InversorCell {
         E: at(u, n, p + q - mu * delta, (1 - mu) * h),
       }
     },
+    joints: ['O', 'P', 'T', 'A', 'B', 'D', 'E'],
+    placeInto(px: number, py: number, out: Float64Array, o: number): boolean {
+      const rho = Math.hypot(px, py)
+      if (invalid || !inRing(rho, rhoMin, rhoMax)) return false
+      const inv = 1 / rho
+      const ux = px * inv
+      const uy = py * inv
+      const nx = -uy
+      const ny = ux
+      const p = rho / (2 * mu)
+      const q = quarter / p
+      const delta = q - p
+      const h = sqrt0(b * b - delta * delta)
+      const t = k / rho
+      const put = (i: number, along: number, across: number) => {
+        out[o + i] = ux * along + nx * across
+        out[o + i + 1] = uy * along + ny * across
+      }
+      out[o] = 0
+      out[o + 1] = 0
+      out[o + 2] = px
+      out[o + 3] = py
+      out[o + 4] = ux * t
+      out[o + 5] = uy * t
+      put(6, -mu * delta, -mu * h)
+      put(8, 2 * q - mu * delta, -mu * h)
+      put(10, (1 - mu) * delta, (1 - mu) * h)
+      put(12, p + q - mu * delta, (1 - mu) * h)
+      return true
+    },
     transmission: [
       ['A', 'D', 'E'],
       ['B', 'E', 'D'],

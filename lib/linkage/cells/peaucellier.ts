@@ -61,6 +61,32 @@ export function peaucellierCell(g: PeaucellierGeometry): InversorCell {
         T: scale(u, k / rho),
       }
     },
+    joints: ['O', 'P', 'A', 'B', 'T'],
+    placeInto(px: number, py: number, out: Float64Array, at: number): boolean {
+      const rho = Math.hypot(px, py)
+      if (invalid || !inRing(rho, rhoMin, rhoMax)) return false
+      const inv = 1 / rho
+      const ux = px * inv
+      const uy = py * inv
+      const nx = -uy
+      const ny = ux
+      const d = (k + rho * rho) / (2 * rho)
+      const w = sqrt0(l * l - d * d)
+      const mx = ux * d
+      const my = uy * d
+      const t = k / rho
+      out[at] = 0
+      out[at + 1] = 0
+      out[at + 2] = px
+      out[at + 3] = py
+      out[at + 4] = mx + nx * w
+      out[at + 5] = my + ny * w
+      out[at + 6] = mx + nx * -w
+      out[at + 7] = my + ny * -w
+      out[at + 8] = ux * t
+      out[at + 9] = uy * t
+      return true
+    },
     transmission: [
       ['A', 'O', 'P'],
       ['B', 'O', 'P'],
