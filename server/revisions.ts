@@ -315,8 +315,7 @@ export async function revisionPdf(caller: Caller | null, projectId: string, calc
   if (!row.pdfKey) throw new AppError('conflict', `The package of revision ${row.label} is still being prepared; try again in a moment.`)
   let bytes: Uint8Array
   if (paper === 'A4' && STORED_PDF_STATES.includes(row.state)) {
-    bytes = await deps.store.get(row.pdfKey)
-    if (sha256Hex(bytes) !== row.pdfHash) throw new Error(`stored PDF of revision ${row.id} does not match its hash`)
+    bytes = await storedPdf(deps, row.pdfKey, row.pdfHash, row.id)
   } else {
     const { calc, revision: rev } = await getRevision(who, projectId, calcId, revisionId)
     bytes = await stamp(rev, await revisionsOf(calc.id), deps, undefined, paper)
@@ -326,6 +325,37 @@ export async function revisionPdf(caller: Caller | null, projectId: string, calc
   }
   const filename = `${project.code}_${row.number}_rev${row.label}_${paper}.pdf`.replace(/[^A-Za-z0-9._-]/g, '_')
   return { bytes, filename, revision: row }
+}
+
+/**
+ * Stored PDFs are content-addressed (`pdf/<sha-256>.pdf`) and never change, so the bytes of one
+ * that matched its hash are kept in memory (up to 64 MB, least recently used out first): a burst of
+ * downloads neither reopens the file nor hashes it again. A file is checked against its hash when it
+ * is read, so only bytes that matched are ever handed out.
+ */
+const PDF_CACHE_BYTES = 64 * 1024 * 1024
+const pdfCache = new Map<string, Uint8Array>()
+let pdfCacheSize = 0
+async function storedPdf(deps: RevisionDeps, key: string, hash: string | null, revisionId: string): Promise<Uint8Array> {
+  const cacheKey = `${key}\u0000${hash}`
+  const hit = pdfCache.get(cacheKey)
+  if (hit) {
+    pdfCache.delete(cacheKey)
+    pdfCache.set(cacheKey, hit)
+    return hit
+  }
+  const bytes = await deps.store.get(key)
+  if (sha256Hex(bytes) !== hash) throw new Error(`stored PDF of revision ${revisionId} does not match its hash`)
+  if (bytes.byteLength <= PDF_CACHE_BYTES / 4) {
+    pdfCache.set(cacheKey, bytes)
+    pdfCacheSize += bytes.byteLength
+    for (const [k, b] of pdfCache) {
+      if (pdfCacheSize <= PDF_CACHE_BYTES) break
+      pdfCache.delete(k)
+      pdfCacheSize -= b.byteLength
+    }
+  }
+  return bytes
 }
 
 /**
