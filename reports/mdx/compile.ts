@@ -53,7 +53,7 @@ async function compile(source: string, mode: Mode): Promise<CompiledTemplate> {
       ]
       options.rehypePlugins = [
         ...(options.rehypePlugins ?? []),
-        ...(mode === 'web' ? [[rehypeKatex, { output: 'html', strict: 'ignore' }] as const] : []),
+        ...(mode === 'web' ? [[rehypeKatex, { output: 'htmlAndMathml', strict: 'ignore' }] as const] : []),
         rehypeStripBlockWhitespace,
       ]
       return options

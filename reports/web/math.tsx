@@ -7,7 +7,7 @@ export function texHtml(tex: string, display: boolean): string {
   const key = `${display ? 'D' : 'I'}${tex}`
   let html = cache.get(key)
   if (html === undefined) {
-    html = katex.renderToString(tex, { displayMode: display, output: 'html', throwOnError: false, strict: 'ignore' })
+    html = katex.renderToString(tex, { displayMode: display, output: 'htmlAndMathml', throwOnError: false, strict: 'ignore' })
     cache.set(key, html)
   }
   return html
