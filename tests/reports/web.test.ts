@@ -16,6 +16,8 @@ describe('renderWebHtml', () => {
     expect(stepOutline(pkg).map((s) => s.id)).toEqual(anchored)
     expect(html).toContain('id="sec-summary"')
     expect(html).toContain('class="katex')
+    // Formulas reach screen readers as MathML beside the visual HTML (WCAG 1.1.1, common practice).
+    expect(html).toContain('<math xmlns="http://www.w3.org/1998/Math/MathML"')
     expect(html).toContain('This calculation supports but does not replace the judgement of a competent engineer')
     expect(html).not.toContain('inv-watermark')
   }, 120_000)
