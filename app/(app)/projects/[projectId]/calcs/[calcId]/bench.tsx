@@ -312,7 +312,7 @@ export function Bench(props: BenchProps) {
           {result && result.feasibility.ok && <Plots result={result} />}
         </div>
       </div>
-      {result && result.feasibility.ok && <PositionsTable result={result} />}
+      {result && result.feasibility.ok && <PositionsTable result={result} system={system} />}
     </div>
     </CrankProvider>
   )

@@ -4,6 +4,7 @@ import { memo, useMemo, useState } from 'react'
 import { createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table'
 import type { CalcResult } from '@/lib/calc/run'
 import type { PositionResult } from '@/lib/contract'
+import { displayUnit, fromSI, kindOfSILabel, type UnitSystem } from '@/lib/units'
 import { useCrank } from './crank-context'
 
 interface Row {
@@ -65,7 +66,15 @@ function csvOf(headers: string[], rows: (string | number)[][]): string {
 }
 
 /** The solved positions: sortable, filterable, exported as CSV; rows where a maximum occurs are marked. */
-export const PositionsTable = memo(function PositionsTable({ result }: { result: CalcResult }) {
+/** A column's unit and conversion in the person's unit system (the engine's values are SI). */
+function unitOf(siUnit: string, system: UnitSystem): { unit: string; show: (v: number) => number } {
+  const kind = system === 'US' ? kindOfSILabel(siUnit) : null
+  if (!kind) return { unit: siUnit, show: (v) => v }
+  const unit = displayUnit('US', kind)
+  return { unit, show: (v) => fromSI(v, unit) }
+}
+
+export const PositionsTable = memo(function PositionsTable({ result, system = 'SI' }: { result: CalcResult; system?: UnitSystem }) {
   const { crankDeg, setCrankDeg: onCrank } = useCrank()
   const [loadCase, setLoadCase] = useState(result.loadCases[0]?.name ?? '')
   const [sorting, setSorting] = useState<SortingState>([])
@@ -75,21 +84,24 @@ export const PositionsTable = memo(function PositionsTable({ result }: { result:
   const shown = useMemo(() => (onlyGoverning ? data.filter((r) => r.governs.length) : data), [data, onlyGoverning])
   const linkNames = Object.keys(data[0]?.links ?? {})
   const pinNames = Object.keys(data[0]?.pins ?? {})
-  const columns = useMemo(
-    () => [
+  const columns = useMemo(() => {
+    const len = unitOf('mm', system)
+    const force = unitOf('N', system)
+    const moment = unitOf('N·mm', system)
+    // Sorting and the CSV read the converted values too, so what is shown is what is exported.
+    return [
       col.accessor('crankDeg', { header: 'θ [°]', cell: (c) => n(c.getValue(), 2) }),
-      col.accessor('y', { header: 'Travel y [mm]', cell: (c) => n(c.getValue(), 2) }),
-      col.accessor('x', { header: 'Tracer x [mm]', cell: (c) => n(c.getValue(), 3) }),
-      col.accessor('torque', { header: 'Drive torque [N·mm]', cell: (c) => n(c.getValue(), 0) }),
+      col.accessor((r) => len.show(r.y), { id: 'y', header: `Travel y [${len.unit}]`, cell: (c) => n(c.getValue() as number, system === 'US' ? 4 : 2) }),
+      col.accessor((r) => len.show(r.x), { id: 'x', header: `Tracer x [${len.unit}]`, cell: (c) => n(c.getValue() as number, system === 'US' ? 5 : 3) }),
+      col.accessor((r) => moment.show(r.torque), { id: 'torque', header: `Drive torque [${moment.unit}]`, cell: (c) => n(c.getValue() as number, 0) }),
       col.accessor('transmission', { header: 'Min. transm. angle [°]', cell: (c) => n(c.getValue(), 1) }),
-      ...linkNames.map((l) => col.accessor((r) => r.links[l], { id: `link-${l}`, header: `${l} [N]`, cell: (c) => n(c.getValue() as number, 0) })),
-      ...pinNames.map((j) => col.accessor((r) => r.pins[j], { id: `pin-${j}`, header: `Pin ${j} [N]`, cell: (c) => n(c.getValue() as number, 0) })),
+      ...linkNames.map((l) => col.accessor((r) => force.show(r.links[l]), { id: `link-${l}`, header: `${l} [${force.unit}]`, cell: (c) => n(c.getValue() as number, system === 'US' ? 1 : 0) })),
+      ...pinNames.map((j) => col.accessor((r) => force.show(r.pins[j]), { id: `pin-${j}`, header: `Pin ${j} [${force.unit}]`, cell: (c) => n(c.getValue() as number, system === 'US' ? 1 : 0) })),
       col.accessor((r) => r.governs.join(', '), { id: 'governs', header: 'Maximum here', enableSorting: false }),
-    ],
-    // The columns follow the mechanism's links and pins.
+    ]
+    // The columns follow the mechanism's links and pins and the unit system.
     // eslint-disable-next-line react-hooks/exhaustive-deps
-    [linkNames.join(), pinNames.join()],
-  )
+  }, [linkNames.join(), pinNames.join(), system])
   const table = useReactTable({
     data: shown,
     columns,
