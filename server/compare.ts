@@ -9,7 +9,7 @@ import { authoriseCalc, type Caller } from './access'
 
 /** The printed inputs table of stored inputs (empty if they no longer parse). */
 export function storedInputRows(inputs: unknown) {
-  const parsed = parseCalcInput(inputs)
+  const parsed = parseCalcInput(inputs, { stored: true })
   return parsed.ok ? inputRowsOf(parsed.input) : []
 }
 

@@ -117,7 +117,7 @@ export async function reportPackageOf(rev: Revision, others: Revision[], paper: 
   const [project] = await db.select().from(projects).where(eq(projects.id, calc.projectId))
   const remarks = await remarksWithThreads(rev.id)
   const name = await namesOf([rev.engineerId, rev.checkerId, rev.approverId])
-  const parsed = parseCalcInput(rev.inputs)
+  const parsed = parseCalcInput(rev.inputs, { stored: true })
   if (!parsed.ok) throw new Error(`stored inputs of revision ${rev.label} no longer parse: ${JSON.stringify(parsed.fieldErrors)}`)
   const all = [...others.filter((r) => r.id !== rev.id), rev].sort((a, b) => a.createdAt.getTime() - b.createdAt.getTime())
   const inputRows = inputRowsOf(parsed.input)

@@ -13,6 +13,8 @@ export function mechanismComparison(result: Pick<CalcResult, 'mechanism' | 'feas
   if (!result.feasibility.ok || positions.length < 2) return { steps: [], tables: [] }
   const ys = positions.map((p) => p.tracer.y)
   const stroke = requiredStroke ?? Math.max(...ys) - Math.min(...ys)
+  // A sweep that does not move the tracer (one angle given twice) has no stroke to compare over.
+  if (!(stroke > 0)) return { steps: [], tables: [] }
   const xs = positions.flatMap((p) => Object.values(p.joints).map((j) => j.x))
   const yj = positions.flatMap((p) => Object.values(p.joints).map((j) => j.y))
   const built = result.steps.find((s) => s.id === 'tol.worst-confirmed')

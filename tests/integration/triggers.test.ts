@@ -48,3 +48,14 @@ describe.each(REVISION_STATES)('a revision that is %s', (state: RevisionState) =
     expect(await refused(db.delete(revisions).where(eq(revisions.id, id)))).toBe(sealed)
   })
 })
+
+describe('a revision superseded before its package was rendered', () => {
+  it('gets its package once; nothing else of it changes, and the package does not change again', async () => {
+    await db.insert(revisions).values({ id: 'r-late', calcId: 'c', label: 'Z', state: 'superseded', inputs: {}, result: {}, engineVersion: 't' })
+    // The first package may only come with nothing else changed.
+    expect(await refused(db.update(revisions).set({ pdfKey: 'k1', pdfHash: 'h1', approvedAt: new Date() }).where(eq(revisions.id, 'r-late')))).toBe(true)
+    expect(await refused(db.update(revisions).set({ pdfKey: 'k1' }).where(eq(revisions.id, 'r-late')))).toBe(true)
+    expect(await refused(db.update(revisions).set({ pdfKey: 'k1', pdfHash: 'h1' }).where(eq(revisions.id, 'r-late')))).toBe(false)
+    expect(await refused(db.update(revisions).set({ pdfKey: 'k2', pdfHash: 'h2' }).where(eq(revisions.id, 'r-late')))).toBe(true)
+  })
+})
