@@ -38,7 +38,7 @@ export function plotFigure(ctx: ReportContext, kind: string, caption: string | u
     return scene ? { scene, label: name, caption: caption ?? 'Straightness deviation of the built mechanisms in the Monte Carlo run (tolerances and pin clearance); dashed: the straightness tolerance.' } : null
   }
   if (kind !== 'links' && kind !== 'pins' && kind !== 'torque' && kind !== 'kinematics') return null
-  const scene = plotScene(ctx.pkg.result, kind as PlotKind, ctx.figureWidth)
+  const scene = plotScene(ctx.pkg.result, kind as PlotKind, ctx.figureWidth, ctx.units)
   if (!scene) return null
   return { scene, label: name, caption: caption ?? PLOT_TITLE[kind as PlotKind] }
 }

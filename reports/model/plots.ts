@@ -9,7 +9,8 @@ import { scaleLinear } from 'd3-scale'
 import { line } from 'd3-shape'
 import type { ReportResult, LoadCasePositions } from '../types'
 import type { PositionResult } from '../../lib/contract'
-import { formatNumber } from './format'
+import { columnUnit, formatNumber } from './format'
+import type { UnitSystem } from '../../lib/units/system'
 import { ACCENT, GRID, INK, MUTED, type Scene, type SceneItem, textWidth } from './scene'
 
 export type PlotKind = 'links' | 'pins' | 'torque' | 'kinematics'
@@ -56,7 +57,11 @@ interface Frame {
   governing?: number[]
 }
 
-export function plotScene(result: ReportResult, kind: PlotKind, width: number): Scene | null {
+/** The scene of a plot, its values in `system` (the engine's are SI; angles stay degrees). */
+export function plotScene(result: ReportResult, kind: PlotKind, width: number, system: UnitSystem = 'SI'): Scene | null {
+  const len = columnUnit('mm', system)
+  const force = columnUnit('N', system)
+  const moment = columnUnit('N·mm', system)
   const w = result.workingRange
   if (kind === 'kinematics') {
     const k = result.kinematics ?? []
@@ -65,7 +70,7 @@ export function plotScene(result: ReportResult, kind: PlotKind, width: number): 
     const req = gmin ? Number(/([\d.]+)/.exec(gmin.required)?.[1]) : undefined
     return panels(
       [
-        { title: 'tracer y_T', yLabel: 'y_T [mm]', series: [{ name: 'y_T', points: k.map((p) => [p.crankDeg, p.tracer.y]) }] },
+        { title: 'tracer y_T', yLabel: `y_T [${len.unit}]`, series: [{ name: 'y_T', points: k.map((p) => [p.crankDeg, len.show(p.tracer.y)]) }] },
         {
           title: 'smallest transmission angle γ',
           yLabel: 'γ [°]',
@@ -83,14 +88,14 @@ export function plotScene(result: ReportResult, kind: PlotKind, width: number): 
   const governing = [...new Set((result.checks ?? []).filter((c) => c.governing && c.crankDeg !== undefined).map((c) => c.crankDeg!))]
   const frame: Frame = { xLabel: 'crank angle θ [°]', working: w ? [w.crankMinDeg, w.crankMaxDeg] : undefined, governing }
   if (kind === 'torque') {
-    const series = lcs.map((lc) => ({ name: lc.name, points: lc.positions.map((p) => [p.crankDeg, p.driveTorque] as [number, number]) }))
-    return panels([{ title: '', series, yLabel: 'τ [N·mm]' }], frame, width, true)
+    const series = lcs.map((lc) => ({ name: lc.name, points: lc.positions.map((p) => [p.crankDeg, moment.show(p.driveTorque)] as [number, number]) }))
+    return panels([{ title: '', series, yLabel: `τ [${moment.unit}]` }], frame, width, true)
   }
   const names = Object.keys(pick[kind](lcs[0].positions[0]))
   const groups = lcs.map((lc) => ({
     title: lc.name,
-    yLabel: kind === 'links' ? 'N [N]' : 'F [N]',
-    series: names.map((n) => ({ name: kind === 'links' ? n : `F_${n}`, points: lc.positions.map((p) => [p.crankDeg, pick[kind](p)[n] ?? 0] as [number, number]) })),
+    yLabel: kind === 'links' ? `N [${force.unit}]` : `F [${force.unit}]`,
+    series: names.map((n) => ({ name: kind === 'links' ? n : `F_${n}`, points: lc.positions.map((p) => [p.crankDeg, force.show(pick[kind](p)[n] ?? 0)] as [number, number]) })),
   }))
   return panels(groups, frame, width, true)
 }

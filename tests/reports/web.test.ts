@@ -47,6 +47,8 @@ describe('a package in US customary units', () => {
     // A step with a force: the SI result, then the same in lbf.
     const force = si.result.steps.find((s) => s.unit === 'N' && typeof s.value === 'number' && (s.value as number) > 10)!
     expect(html).toContain(`${formatNumber(force.value as number)} N (${formatNumber((force.value as number) / LBF)} lbf)`)
+    // The plots too: the drive torque axis in lbf·in.
+    expect(html).toContain('τ [lbf·in]')
     // The SI package has no US values.
     expect(plain(await renderWebHtml(si))).not.toContain(' lbf')
   }, 120_000)

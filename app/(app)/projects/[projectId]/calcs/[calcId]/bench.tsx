@@ -10,6 +10,7 @@ import { CrankProvider } from './crank-context'
 import { InputsForm, type FormBinding } from './inputs-form'
 import { KeyResults, type RevisionSummary } from './key-results'
 import { MechanismDrawing } from './mechanism-drawing'
+import { DrawingUnits } from './mechanism-svg'
 import { Plots } from './plots'
 import { PositionsTable } from './positions-table'
 import { BASIS_FIELDS, FACTOR_FIELDS, geometryFields, LINK_FIELDS, OPERATING_SPEED_FIELDS, OVERRIDE_FIELDS, PIN_FIELDS, SELF_WEIGHT_FIELDS, STROKE_FIELDS, TOLERANCE_FIELDS } from './input-fields'
@@ -308,8 +309,10 @@ export function Bench(props: BenchProps) {
           )}
         </div>
         <div className="flex min-w-0 flex-col gap-4">
-          <MechanismDrawing mechanism={calcType} geometry={geometry} result={result} loads={loads} marginDeg={marginDeg} />
-          {result && result.feasibility.ok && <Plots result={result} />}
+          <DrawingUnits.Provider value={system}>
+            <MechanismDrawing mechanism={calcType} geometry={geometry} result={result} loads={loads} marginDeg={marginDeg} />
+          </DrawingUnits.Provider>
+          {result && result.feasibility.ok && <Plots result={result} system={system} />}
         </div>
       </div>
       {result && result.feasibility.ok && <PositionsTable result={result} system={system} />}

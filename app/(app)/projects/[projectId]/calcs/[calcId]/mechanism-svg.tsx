@@ -1,5 +1,6 @@
 /** The mechanism as SVG: one picture for the live drawing and for the sketch of the inputs. */
-import { memo, useId } from 'react'
+import { createContext, memo, useContext, useId } from 'react'
+import { fromSI, type UnitSystem } from '@/lib/units'
 import type { Point } from '@/lib/contract'
 import { jointsAt, type MechanismFrame } from './mechanism-geometry'
 
@@ -16,6 +17,13 @@ export const DIMENSION_OF: Record<string, Record<string, string>> = {
 }
 
 const fmt = (x: number) => (Math.abs(x) >= 100 ? x.toFixed(0) : Math.abs(x) >= 10 ? x.toFixed(1) : x.toFixed(2))
+
+/** Lengths on the drawing in the person's unit system: bare numbers in mm, or inches marked as such. */
+export const DrawingUnits = createContext<UnitSystem>('SI')
+function useLength() {
+  const system = useContext(DrawingUnits)
+  return (mm: number) => (system === 'US' ? `${fromSI(mm, 'in').toFixed(3)} in` : fmt(mm))
+}
 
 function Arrow({ from, to, colour, width, head }: { from: Point; to: Point; colour: string; width: number; head: number }) {
   const dx = to.x - from.x
@@ -38,6 +46,7 @@ function Arrow({ from, to, colour, width, head }: { from: Point; to: Point; colo
 
 /** What does not move with the crank: crank circle, reach ring, locked positions, tracer path, e and d. Drawn once per geometry. */
 const StaticLayer = memo(function StaticLayer({ frame, showValues }: { frame: MechanismFrame; showValues: boolean }) {
+  const len = useLength()
   const { y0, x1, x0, y1 } = frame.box
   const span = Math.max(x1 - x0, y1 - y0)
   const fs = span * 0.032
@@ -73,13 +82,13 @@ const StaticLayer = memo(function StaticLayer({ frame, showValues }: { frame: Me
       {/* Ground: pole O and crank pivot C, with e and the line offset d dimensioned. */}
       <line x1={0} y1={span * 0.05} x2={frame.e} y2={span * 0.05} stroke={MUTED} strokeWidth={sw * 0.4} />
       <text x={frame.e / 2} y={span * 0.05 + fs} fontSize={fs * 0.8} textAnchor="middle" fill={MUTED}>
-        e{showValues ? ` = ${fmt(frame.e)}` : ''}
+        e{showValues ? ` = ${len(frame.e)}` : ''}
       </text>
       {frame.path.length > 1 && frame.feasible && (
         <>
           <line x1={0} y1={-y0 - span * 0.06} x2={frame.cell.k / (2 * frame.r)} y2={-y0 - span * 0.06} stroke={MUTED} strokeWidth={sw * 0.4} />
           <text x={frame.cell.k / (4 * frame.r)} y={-y0 - span * 0.075} fontSize={fs * 0.8} textAnchor="middle" fill={MUTED}>
-            d = k/(2r){showValues ? ` = ${fmt(frame.cell.k / (2 * frame.r))}` : ''}
+            d = k/(2r){showValues ? ` = ${len(frame.cell.k / (2 * frame.r))}` : ''}
           </text>
         </>
       )}
@@ -98,6 +107,7 @@ interface DrawProps {
 
 /** One picture of the mechanism: links, pivots, the tracer's path, locked positions, dimensions and force arrows. */
 export function MechanismSvg({ mechanism, frame, joints, forces, load, showValues }: DrawProps) {
+  const len = useLength()
   const titleId = useId()
   const { x0, y0, x1, y1 } = frame.box
   const span = Math.max(x1 - x0, y1 - y0)
@@ -124,7 +134,7 @@ export function MechanismSvg({ mechanism, frame, joints, forces, load, showValue
                 {d && (
                   <text x={m.x} y={-m.y - fs * 0.3} fontSize={fs * 0.85} fill={l.kind === 'crank' ? ACCENT : MUTED} textAnchor="middle" fontStyle="italic">
                     {d}
-                    {showValues ? ` = ${fmt(l.length)}` : ''}
+                    {showValues ? ` = ${len(l.length)}` : ''}
                   </text>
                 )}
               </g>

@@ -3,6 +3,8 @@
 import { memo, useMemo, useState } from 'react'
 import type { CalcResult } from '@/lib/calc/run'
 import { plotScene, PLOT_TITLE, type PlotKind } from '@/reports/model/plots'
+import { columnUnit } from '@/reports/model/format'
+import type { UnitSystem } from '@/lib/units'
 import type { Scene } from '@/reports/model/scene'
 import { utilisationScene } from '@/reports/model/utilisation'
 import { useCrank } from './crank-context'
@@ -16,8 +18,8 @@ import { useCrank } from './crank-context'
 type Axis = 'crank' | 'travel'
 
 /** The result with each position's x value replaced by the tracer's travel along the line. */
-function byTravel(result: CalcResult): CalcResult {
-  const swap = <T extends { crankDeg: number; tracer: { y: number } }>(p: T): T => ({ ...p, crankDeg: p.tracer.y })
+function byTravel(result: CalcResult, toUnit: (mm: number) => number): CalcResult {
+  const swap = <T extends { crankDeg: number; tracer: { y: number } }>(p: T): T => ({ ...p, crankDeg: toUnit(p.tracer.y) })
   return { ...result, positions: result.positions.map(swap), loadCases: result.loadCases.map((lc) => ({ ...lc, positions: lc.positions.map(swap) })) }
 }
 
@@ -66,17 +68,18 @@ function SceneView({ scene, label, cursor, onPick, testId }: { scene: Scene; lab
 
 const WIDTH = 520
 
-export const Plots = memo(function Plots({ result }: { result: CalcResult }) {
+export const Plots = memo(function Plots({ result, system = 'SI' }: { result: CalcResult; system?: UnitSystem }) {
   const { crankDeg, setCrankDeg: onCrank } = useCrank()
   const [kind, setKind] = useState<PlotKind>('links')
   const [axis, setAxis] = useState<Axis>('crank')
-  const source = useMemo(() => (axis === 'travel' ? byTravel(result) : result), [axis, result])
+  const len = useMemo(() => columnUnit('mm', system), [system])
+  const source = useMemo(() => (axis === 'travel' ? byTravel(result, len.show) : result), [axis, result, len])
   const scene = useMemo(() => {
-    const s = plotScene(source, kind, WIDTH)
+    const s = plotScene(source, kind, WIDTH, system)
     if (!s || axis === 'crank') return s
-    // The shared scene labels its x axis in degrees; against travel it reads in mm.
-    return { ...s, items: s.items.map((it) => (it.kind === 'text' && it.text === 'crank angle θ' ? { ...it, text: 'tracer travel y [mm]' } : it.kind === 'text' && /°$/.test(it.text) ? { ...it, text: it.text.slice(0, -1) } : it)) }
-  }, [source, kind, axis])
+    // The shared scene labels its x axis in degrees; against travel it reads in the length unit.
+    return { ...s, items: s.items.map((it) => (it.kind === 'text' && it.text === 'crank angle θ [°]' ? { ...it, text: `tracer travel y [${len.unit}]` } : it.kind === 'text' && /°$/.test(it.text) ? { ...it, text: it.text.slice(0, -1) } : it)) }
+  }, [source, kind, axis, system, len])
   const util = useMemo(() => {
     const s = utilisationScene(result.checks, WIDTH, new Map())
     return s && { ...s, items: s.items.map((it) => (it.kind === 'text' && it.text.startsWith('—  ') ? { ...it, text: it.text.slice(3) } : it)) }
