@@ -20,7 +20,7 @@ const EQUIVALENT = [
   ['lib/units/format.ts', 'Math.abs(x) >= 1000', 'false', 'digitsOf: decimalsOf(x) is 0 from 1000 up'],
   ['lib/units/format.ts', 'Math.abs(x) >= 1000', 'Math.abs(x) > 1000', 'digitsOf: decimalsOf(1000) = 0'],
   ['lib/units/format.ts', 'Math.abs(x) < SMALL', 'Math.abs(x) <= SMALL', 'roundShown: both branches round 10⁻³ to 0.001'],
-  ['lib/units/format.ts', 'r < 0', 'r <= 0', 'formatNumber: r = 0 has returned "0" before'],
+  ['lib/units/format.ts', 'r < 0', 'r <= 0', 'formatNumber, texNumber: r = 0 has returned "0" before'],
   ['lib/units/format.ts', 'SIGNIFICANT - 1', 'SIGNIFICANT + 1', 'toPrecision of a value already rounded to 3 figures: 5 figures keep the same number'],
   // After a carry into the next decade (999.96 → 1000) the value is a power of ten, which rounding x again at
   // the coarser step gives as well (nearest: x is within half a fine step of it; up/down: within one).
@@ -30,12 +30,20 @@ const EQUIVALENT = [
   ['lib/units/format.ts', '{\n    d = decimalsOf(r)\n    r = roundTo(x, 10 ** -d, dir)\n  }', '{}', 'roundShown: re-rounding after a carry gives the same power of ten'],
   ['lib/units/format.ts', 'e < -300', 'e <= -300', 'at 10⁻³⁰⁰ both ways of applying the power are exact enough for 3 figures'],
   ['lib/units/format.ts', 'e < -300', 'true', 'the two-step power gives the same 3 figures for normal numbers'],
+  ['lib/units/format.ts', '-300', '+300', 'e < 300 always holds below 10⁻³: the two-step power, same 3 figures as above'],
+  // AISC §D5.2 w ≥ 2b_e + d with b_e ≤ c = (w − d0)/2: 2b_e + d ≤ w − d0 + d < w, the rule always holds, so a
+  // smaller printed demand changes neither the sign nor the rounding of its comparison (only in the printed working).
+  ['lib/checks/bases/aisc360.ts', '2 * beDim + e.d', '2 * beDim - e.d', 'D5.2 width rule always met: a smaller demand prints the same', 'substituted'],
+  ['lib/checks/bases/aisc360.ts', '2 * beDim', '2 / beDim', 'D5.2 width rule always met: a smaller demand prints the same', 'substituted'],
+  // 1/32 in = 0.79375 mm is 7937.4999… in units of 10⁻⁴ in binary: printed 0.7937 to nearest and rounded down alike.
+  ['lib/checks/bases/aisc360.ts', 'e.d0 - e.d', 'e.d0 + e.d', 'D5.2 hole: the capacity 1/32 in prints 0.7937 whichever way it is rounded', 'shownCapacity(e.d0 - e.d, HOLE_OVERSIZE)'],
   // |e − r| ≤ 1e-9·max(e, r) and ≤ 1e-9·min(e, r) differ by 1e-9·|e − r|, far below the resolution of |e − r|.
   ['lib/linkage/geometry.ts', 'Math.max(e, r)', 'Math.min(e, r)', 'isStraight: the two bounds differ by 1e-18 relative'],
   ['lib/linkage/geometry.ts', 'i <= n', 'i < n', 'halfStroke: the stroke is symmetric, |T_y| at −θ_lim (sampled first) equals |T_y| at +θ_lim'],
 ]
-const equivalent = (path, original, replacement) =>
-  EQUIVALENT.find(([f, o, r]) => f === path && o === original && (r === '*' || r === replacement))
+/** A row matches the file, the replaced text, the replacement ('*': any) and, when given, text on the mutant's line. */
+const equivalent = (path, original, replacement, line) =>
+  EQUIVALENT.find(([f, o, r, , ctx]) => f === path && o === original && (r === '*' || r === replacement) && (!ctx || line.includes(ctx)))
 
 const file = process.argv[2] ?? 'reports-mutation/mutation.json'
 const report = JSON.parse(readFileSync(file, 'utf8'))
@@ -81,7 +89,8 @@ for (const [path, f] of Object.entries(report.files)) {
   const ms = f.mutants.map((m) => {
     const [s, e] = [offsetOf(f.source, m.location.start), offsetOf(f.source, m.location.end)]
     const alive = m.status === 'Survived' || m.status === 'NoCoverage'
-    return { ...m, display: isDisplay(sf, s, e), equivalent: alive ? equivalent(path, f.source.slice(s, e), m.replacement ?? '') : undefined }
+    const line = f.source.split('\n')[m.location.start.line - 1]
+    return { ...m, display: isDisplay(sf, s, e), equivalent: alive ? equivalent(path, f.source.slice(s, e), m.replacement ?? '', line) : undefined }
   })
   const a = counted(ms)
   const b = counted(ms.filter((m) => !m.display))

@@ -142,6 +142,14 @@ describe('the clause each check cites', () => {
       expect(cited(basis, { link: slender('B'), forces: small })).toEqual(aiscLink(m, 'E3-3'))
     })
   }
+  it('AISC 360-16 §H1.1: at P_r/P_c = 0.2 exactly the clause and the reference both cite H1-1a (P_r/P_c ≥ 0.2)', () => {
+    // LRFD, K so small that F_cr = F_y: P_c = min(0.9·300·600, 0.9·300·600) = 162 000 N; N = 32 400 N → 0.2 exactly
+    const c = cited({ kind: 'aisc360', method: 'LRFD' }, {
+      link: { section: { shape: 'flat', width: 60, thickness: 10 }, material: 'Bar300', eye: { pinDiameter: 20, holeDiameter: 21, edgeAlong: 25 }, length: 500, effectiveLengthFactor: 1e-9 },
+      forces: { tension: 32400, moment: 1093500 },
+    })
+    expect(c['axial-bending']).toEqual(aiscLink('LRFD', 'E3-2', 'H1-1a')['axial-bending'])
+  })
   it('allowable stress: pins and links', () => {
     const basis = { kind: 'allowable', factorOfSafety: 2.4 }
     expect(cited(basis, { joint: pin(true) })).toEqual(allowPin(true))

@@ -104,6 +104,9 @@ const LINKS = [
   { section: { shape: 'flat', width: 47, thickness: 9 }, material: 'Bar300', eye: { thickness: 9, width: 47, pinDiameter: 17, holeDiameter: 17.6, edgeAlong: 19.3 }, length: 430, effectiveLengthFactor: 0.93 },
   // round, Table 3.9 type B
   { section: { shape: 'round', diameter: 27 }, material: 'Plate250', eye: { thickness: 11, width: 53, pinDiameter: 21, holeDiameter: 21.7, edgeAlong: 23.1, table39Type: 'B' }, length: 610 },
+  // dimensions with five figures, so a rule that fails prints a rounded down (14.347 → 14.34, nearest 14.35):
+  // AISC §D5.2 a ≥ 1.33 b_e = 1.33 · min(2 · 9 + 16.002, (47.123 − 17.6)/2) = 19.63 > 14.347 fails
+  { section: { shape: 'flat', width: 47, thickness: 9 }, material: 'Bar300', eye: { thickness: 9, width: 47.123, pinDiameter: 17, holeDiameter: 17.6, edgeAlong: 14.347 }, length: 430 },
   // tube, short and stocky (inelastic / Johnson)
   { section: { shape: 'tube', outerDiameter: 42.4, wall: 3.2 }, material: 'Bar300', eye: { thickness: 7.5, width: 61, pinDiameter: 19, holeDiameter: 19.5, edgeAlong: 31 }, length: 270 },
 ]
