@@ -13,8 +13,8 @@
  * allowable stress: two shear planes of length a (common practice), Ssy = 0.577 Sy (distortion energy,
  * Shigley's Mechanical Engineering Design, ch. 5). That a force which may point across the link has to
  * be checked with the distance in the force direction, i.e. the smaller of a and c, is the reading of
- * Table 3.9 the library documents (docs/checks.md) — the rule "distance in the direction of the force"
- * is common practice for eyes loaded off their axis.
+ * Table 3.9 the library applies (lib/checks/bases/en1993-link.ts) — the rule "distance in the direction of
+ * the force" is common practice for eyes loaded off their axis.
  */
 import { describe, expect, it } from 'vitest'
 import { checkComponent, checksInputSchema, runChecks } from '@/lib/checks'
