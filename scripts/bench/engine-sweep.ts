@@ -14,6 +14,7 @@ import { placeAt } from '@/lib/linkage/crank'
 import { runSweep, sweepArrays } from '@/lib/linkage/sweep'
 import { DEG } from '@/lib/linkage/vec'
 import { getMechanism } from '@/lib/mechanisms'
+import { measure } from '../lib/measure'
 
 const CASES: MechanismInput[] = [
   {
@@ -30,26 +31,6 @@ const CASES: MechanismInput[] = [
   },
 ]
 
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b)
-  return s[Math.floor(s.length / 2)]
-}
-
-/** Median wall and CPU ms of fn over `runs` warm runs. */
-function measure(fn: () => unknown, warm: number, runs: number): { wall: number; cpu: number } {
-  for (let i = 0; i < warm; i++) fn()
-  const wall: number[] = []
-  const cpu: number[] = []
-  for (let i = 0; i < runs; i++) {
-    const t0 = performance.now()
-    const c0 = process.cpuUsage()
-    fn()
-    const c = process.cpuUsage(c0)
-    wall.push(performance.now() - t0)
-    cpu.push((c.user + c.system) / 1000)
-  }
-  return { wall: median(wall), cpu: median(cpu) }
-}
 
 const ms = (x: number) => (x < 1 ? x.toFixed(3) : x.toFixed(2))
 const load = () => os.loadavg().map((x) => x.toFixed(2)).join(' ')

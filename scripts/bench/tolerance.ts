@@ -11,6 +11,7 @@ import { placeAt } from '@/lib/linkage/crank'
 import { DEG } from '@/lib/linkage/vec'
 import { mechanismComponents } from '@/lib/mechanisms'
 import { eyeForcesFromLoad, monteCarlo, prepareTolerance, toleranceModelFor } from '@/lib/tolerance'
+import { measure } from '../lib/measure'
 
 const SAMPLES = 100_000
 const POSITIONS = 50
@@ -21,24 +22,6 @@ const CASES: MechanismInput[] = [
   { mechanism: 'hart', geometry: { long: 240, short: 100, ratio: 0.3, crank: 40 }, loads: [{ name: 'push', fx: 0, fy: 150 }] },
 ]
 
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b)
-  return s[Math.floor(s.length / 2)]
-}
-
-function time(fn: () => unknown, runs: number): { wall: number; cpu: number } {
-  const wall: number[] = []
-  const cpu: number[] = []
-  for (let i = 0; i < runs; i++) {
-    const t0 = performance.now()
-    const c0 = process.cpuUsage()
-    fn()
-    const c = process.cpuUsage(c0)
-    wall.push(performance.now() - t0)
-    cpu.push((c.user + c.system) / 1000)
-  }
-  return { wall: median(wall), cpu: median(cpu) }
-}
 
 const load = () => loadavg().map((x) => x.toFixed(2)).join(' / ')
 const fmt = (t: { wall: number; cpu: number }) => `${(t.wall / 1000).toFixed(3)} s (cpu ${(t.cpu / 1000).toFixed(3)} s)`
@@ -60,16 +43,16 @@ export default function bench(): void {
     })
     monteCarlo(setup, { samples: 5000, seed: 7 }) // warm-up
     let mean = 0
-    const mc = time(() => (mean = monteCarlo(setup, { samples: SAMPLES, seed: 1 }).mean), RUNS)
+    const mc = measure(() => (mean = monteCarlo(setup, { samples: SAMPLES, seed: 1 }).mean), 0, RUNS)
     const angles = setup.linkage.anglesDeg
     const { cell, crank, offset } = model
-    const ideal = time(() => {
+    const ideal = measure(() => {
       let sink = 0
       for (let s = 0; s < SAMPLES; s++) {
         for (let p = 0; p < POSITIONS; p++) sink += placeAt(cell, offset, crank, angles[p] * DEG)!.T.y
       }
       return sink
-    }, RUNS)
+    }, 0, RUNS)
     const random = setup.items.filter((i) => i.fixed === null && i.plusMinus > 0).length
     console.log(`${input.mechanism}: ${SAMPLES.toLocaleString('en')} samples × ${POSITIONS} positions, ${random} random tolerances, ${setup.items.length - random} clearance shifts (mean deviation ${mean.toFixed(4)} mm)`)
     console.log(`  Monte Carlo, perturbed kinematics + straightness   median of ${RUNS}: ${fmt(mc)}`)
