@@ -4,7 +4,7 @@
  * straightness (as built when analysed, else ideal), largest pin force and drive torque.
  */
 import type { CalcResult, Step, Table } from '@/lib/contract'
-import { compareStraightLineMechanisms, type ExactCellRow } from '@/lib/fourbar'
+import { compareStraightLineMechanisms, exactRow, tableRow, type Comparison, type ExactCellRow } from '@/lib/fourbar'
 import { mechanismLabel } from '@/lib/mechanisms'
 
 /** The comparison's steps (in the appendix: the table carries the figures) and table, or nothing when the calc has no solved positions. */
@@ -32,6 +32,22 @@ export function mechanismComparison(result: Pick<CalcResult, 'mechanism' | 'feas
     inputSpanDeg: result.workingRange ? result.workingRange.crankMaxDeg - result.workingRange.crankMinDeg : undefined,
     stepId: built?.id,
   }
-  const c = compareStraightLineMechanisms({ stroke, load, exactCells: [exact] })
-  return { steps: c.steps.map((s) => ({ ...s, appendix: true })), tables: [c.table] }
+  const c = fourBarsFor(stroke, load)
+  return { steps: c.steps.map((s) => ({ ...s, appendix: true })), tables: [{ ...c.table, rows: [...c.table.rows, tableRow(exactRow(exact))] }] }
+}
+
+/**
+ * The four-bars depend on the stroke and the load only, not on the cell: the bench recomputes the calc
+ * as the engineer types the cell's sizes, so the last few are kept (they are about two thirds of a calc's time).
+ */
+const fourBarCache = new Map<string, Comparison>()
+function fourBarsFor(stroke: number, load: { fx: number; fy: number }): Comparison {
+  const key = `${stroke}|${load.fx}|${load.fy}`
+  let c = fourBarCache.get(key)
+  if (!c) {
+    c = compareStraightLineMechanisms({ stroke, load })
+    if (fourBarCache.size >= 8) fourBarCache.delete(fourBarCache.keys().next().value!)
+    fourBarCache.set(key, c)
+  }
+  return c
 }

@@ -95,6 +95,43 @@ export function straightnessStep(r: FourBarResult): Step {
   }
 }
 
+/** An exact cell as a row of the comparison. */
+export function exactRow(e: ExactCellRow): ComparisonRow {
+  return {
+    kind: 'exact',
+    id: e.name,
+    mechanism: e.name,
+    links: e.links,
+    pins: e.pins,
+    footprintWidth: e.footprint.width,
+    footprintHeight: e.footprint.height,
+    straightness: e.straightness,
+    straightnessBasis: e.straightnessBasis,
+    peakPinForce: e.peakPinForce,
+    peakTorque: Math.abs(e.peakTorque),
+    inputSpanDeg: e.inputSpanDeg ?? null,
+    minTransmissionDeg: null,
+    stepId: e.stepId ?? null,
+  }
+}
+
+/** A comparison row as a row of the "Choice of mechanism" table. */
+export function tableRow(r: ComparisonRow): Table['rows'][number] {
+  return {
+    mechanism: r.mechanism,
+    links: r.links,
+    pins: r.pins,
+    width: r.footprintWidth,
+    height: r.footprintHeight,
+    straightness: r.straightness,
+    basis: r.straightnessBasis,
+    pinForce: r.peakPinForce,
+    torque: r.peakTorque,
+    span: r.inputSpanDeg,
+    mu: r.minTransmissionDeg,
+  }
+}
+
 /** Sizes the four four-bars for the stroke and load and builds the "Choice of mechanism" table. */
 export function compareStraightLineMechanisms(input: ComparisonInput): Comparison {
   const opts: FourBarOptions = { stroke: input.stroke, load: input.load, positions: input.positions, line: input.line, rules: input.rules }
@@ -115,24 +152,7 @@ export function compareStraightLineMechanisms(input: ComparisonInput): Compariso
     minTransmissionDeg: r.minTransmissionDeg,
     stepId: `cmp.${r.name}.straightness`,
   }))
-  for (const e of input.exactCells ?? []) {
-    rows.push({
-      kind: 'exact',
-      id: e.name,
-      mechanism: e.name,
-      links: e.links,
-      pins: e.pins,
-      footprintWidth: e.footprint.width,
-      footprintHeight: e.footprint.height,
-      straightness: e.straightness,
-      straightnessBasis: e.straightnessBasis,
-      peakPinForce: e.peakPinForce,
-      peakTorque: Math.abs(e.peakTorque),
-      inputSpanDeg: e.inputSpanDeg ?? null,
-      minTransmissionDeg: null,
-      stepId: e.stepId ?? null,
-    })
-  }
+  rows.push(...(input.exactCells ?? []).map(exactRow))
   const table: Table = {
     id: 'cmp.choice',
     section: SECTION,
@@ -150,19 +170,7 @@ export function compareStraightLineMechanisms(input: ComparisonInput): Compariso
       { key: 'span', label: 'Drive angle span', unit: '°', digits: 1 },
       { key: 'mu', label: 'Least transmission angle', unit: '°', digits: 1 },
     ],
-    rows: rows.map((r) => ({
-      mechanism: r.mechanism,
-      links: r.links,
-      pins: r.pins,
-      width: r.footprintWidth,
-      height: r.footprintHeight,
-      straightness: r.straightness,
-      basis: r.straightnessBasis,
-      pinForce: r.peakPinForce,
-      torque: r.peakTorque,
-      span: r.inputSpanDeg,
-      mu: r.minTransmissionDeg,
-    })),
+    rows: rows.map(tableRow),
   }
   return { fourBars, rows, table, steps: fourBars.map(straightnessStep) }
 }

@@ -5,7 +5,7 @@
  */
 export { analyseFourBar, STRAIGHTNESS_SAMPLES } from './analyse'
 export type { FourBarOptions, FourBarPosition, FourBarResult, Peak } from './analyse'
-export { compareStraightLineMechanisms, straightnessStep } from './compare'
+export { compareStraightLineMechanisms, exactRow, straightnessStep, tableRow } from './compare'
 export type { Comparison, ComparisonInput, ComparisonRow, ExactCellRow } from './compare'
 export { DEFAULT_RULES, FOURBAR_NAMES, sizeFourBar } from './linkages'
 export type { FourBarName, FourBarRules, SizedFourBar } from './linkages'
