@@ -16,13 +16,24 @@ export interface CalcState {
   cancel: () => void
 }
 
+/** The inputs with the tolerance study reduced to its worst case (no samples). */
+function withoutMonteCarlo(payload: unknown): unknown {
+  const t = (payload as { tolerances?: object } | null)?.tolerances
+  return t ? { ...(payload as object), tolerances: { ...t, samples: 0 } } : payload
+}
+
 /**
  * Runs the calc of `payload` in a Web Worker, so a long run (a Monte Carlo study, many positions)
  * never freezes the page: new inputs end the run in progress and start another, Cancel ends it.
- * The first outcome is computed at once, on this thread, so the page never starts empty.
+ * A first outcome (without the Monte Carlo run) is computed at once, on this thread, so the page never starts empty.
  */
 export function useCalc(payload: unknown): CalcState {
-  const [state, setState] = useState(() => ({ outcome: benchCalculate(payload), of: payload, running: false, progress: null as number | null, cancelled: false }))
+  // The first outcome (on the server and on arrival) leaves out the Monte Carlo run, the one part that
+  // takes long; the worker then runs the whole calc at once.
+  const [state, setState] = useState(() => {
+    const quick = withoutMonteCarlo(payload)
+    return { outcome: benchCalculate(quick), of: quick === payload ? payload : null, running: false, progress: null as number | null, cancelled: false }
+  })
   const worker = useRef<Worker | null>(null)
   const latest = useRef(0)
   const busy = useRef(false)
