@@ -71,6 +71,10 @@ describe('EN 1993-1-8 Table 3.9 for the resultant in its worst direction, γM0 =
     expectPrinted(s['eye-side'], [4.4, 21, 3, 11.4, 60, 21, 2, 19.5])
     expect(c['eye-side'].clause).toBe(`${T39} type A: c ≥ F_Ed γM0/(2 t f_y) + d0/3`)
     expect(c['eye-side'].check).toBe('Eye side distance c (Table 3.9 type A)')
+    // the working prints the d0/3 rule as such: c_req = 4.4 + 21/3
+    expect(s['eye-side'].substituted).toContain('c_{req} = 4.4 + \\frac{21}{3} = 11.4')
+    // a force given directly names no pin
+    expect(s['eye-end'].note).toContain("the largest pin force on the link's eyes, in N;")
   })
   it('the eye is sized for the factored eye force: 20 000 × 1.35 × 1.1 = 29 700 N', () => {
     // 29 700 · 1.1/6000 = 5.445 mm; a_req = 5.445 + 14 = 19.445 mm; across c_req = 19.445 ≤ 19.5 → u = 0.997179
@@ -99,6 +103,11 @@ describe('EN 1993-1-8 Table 3.9 for the resultant in its worst direction, γM0 =
     expect(c['eye-thickness'].clause).toBe(`${T39} type B: t ≥ 0.7 sqrt(F_Ed γM0 / f_y)`)
     expect(c['eye-hole'].clause).toBe(`${T39} type B: d0 ≤ 2.5 t`)
     expect(c['eye-end']).toBeUndefined()
+  })
+  it('type B hole rule met and printed to nearest: d0 = 21.374 ≤ 2.5 · 10 = 25 mm, shown 21.37', () => {
+    const { c, s } = run(EN, { tension: 1000 }, { table39Type: 'B', holeDiameter: 21.374, pinDiameter: 21 })
+    expect(c['eye-hole'].pass).toBe(true)
+    expect(s['eye-hole'].substituted).toBe('21.37\\ \\text{mm} \\le 2.5 \\cdot 10 = 25\\ \\text{mm}')
   })
   it('type B hole rule not met: d0 = 27 > 2.5 · 10 = 25', () => {
     const { c, s } = run(EN, { tension: 1000 }, { table39Type: 'B', holeDiameter: 27, pinDiameter: 26 })
@@ -231,7 +240,8 @@ describe('the worst direction from the envelopes (runChecks)', () => {
   })
   it('EN: across from the envelope makes c take the 2d0/3 rule (F = 35 640 N, γM0 1.1)', () => {
     // 35 640 · 1.1/6000 = 6.534; c_req = 6.534 + 14 = 20.534 > 19.5 → fails, u = 1.053026
-    const { c } = go(EN, 24000, 5000)
+    const { c, s } = go(EN, 24000, 5000)
+    expect(s['eye-end'].note).toContain("the largest pin force on the link's eyes (largest at pin B), in N")
     near(c['eye-side'].demand, 20.534, 1e-12)
     expect(c['eye-side'].pass).toBe(false)
     expect(c['eye-side'].crankDeg).toBe(95)
