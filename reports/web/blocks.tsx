@@ -10,9 +10,13 @@ import { formatUtilisation } from '../model/format'
 import { Tex } from './math'
 import { SceneSvg } from './scene'
 
+/** Columns from which a table may be wider than the text column. */
+const WIDE_TABLE = 7
+
 export function HtmlTable({ view, caption = true }: { view: TableView; caption?: boolean }) {
   return (
-    <div className="inv-table-wrap">
+    // A table wide enough to scroll sideways can be reached and scrolled from the keyboard.
+    <div className="inv-table-wrap" {...(view.headers.length >= WIDE_TABLE ? { tabIndex: 0, role: 'region', 'aria-label': view.title } : {})}>
       <table className="inv-table" id={`table-${view.id}`}>
         {caption ? <caption>{view.title}</caption> : null}
         <thead>
