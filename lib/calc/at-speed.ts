@@ -9,9 +9,8 @@ import { DEFAULT_PLATE_MATERIAL, mergedLink } from '@/lib/checks/resolve'
 import { findMaterial } from '@/lib/checks/resolve-material'
 import type { MechanismResult, Step } from '@/lib/contract'
 import { bodyFromSection, dynamicEnvelope, mechanismDynamics, type LinkBody } from '@/lib/dynamics'
+import { weightPerMmOf } from '@/lib/linkage/analyse'
 import { getMechanism, type Geometry } from '@/lib/mechanisms'
-
-const DEG = Math.PI / 180
 
 export interface OperatingSpeed {
   /** Crank speed, rev/min, constant over the stroke. */
@@ -79,10 +78,8 @@ export function withOperatingSpeed(mech: MechanismResult, input: Inputs, checks:
   )
   if (typeof bodies === 'string') return { ok: false, fieldErrors: { 'operatingSpeed.rpm': bodies } }
   const { cell, crank, offset } = getMechanism(input.mechanism).model(input.geometry)
-  const sw = input.selfWeight
-  // The same weight per mm as the static cases (lib/linkage/analyse.ts), so gravity is not counted twice.
-  const perMm = sw ? sw.density * sw.area * 1e-9 * sw.g : 0
-  const weightPerMm = sw ? { x: perMm * Math.cos(sw.directionDeg * DEG), y: perMm * Math.sin(sw.directionDeg * DEG) } : null
+  // The same weight per mm as the static cases, so gravity is not counted twice.
+  const weightPerMm = weightPerMmOf(input.selfWeight)
   const d = mechanismDynamics({
     cell,
     crank,

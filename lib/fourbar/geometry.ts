@@ -1,21 +1,14 @@
 /**
  * Small plane geometry for the four-bars: vectors, the intersection of two circles, and the
- * total-least-squares line of a set of points with the largest distance from it. Self-contained
- * on purpose (no imports), so the four-bars can be checked apart from the inversor engine.
+ * total-least-squares line of a set of points with the largest distance from it. The vector
+ * operations are the engine's (lib/linkage/vec).
  */
 import type { Point } from '@/lib/contract'
 
+import { add, cross, dist, dot, norm, perp, scale, sub } from '../linkage/vec'
+
+export { add, cross, dist, dot, norm, perp, scale, sub }
 export const pt = (x: number, y: number): Point => ({ x, y })
-export const add = (a: Point, b: Point): Point => ({ x: a.x + b.x, y: a.y + b.y })
-export const sub = (a: Point, b: Point): Point => ({ x: a.x - b.x, y: a.y - b.y })
-export const scale = (a: Point, k: number): Point => ({ x: a.x * k, y: a.y * k })
-export const dot = (a: Point, b: Point): number => a.x * b.x + a.y * b.y
-/** z-component of a × b. */
-export const cross = (a: Point, b: Point): number => a.x * b.y - a.y * b.x
-export const norm = (a: Point): number => Math.hypot(a.x, a.y)
-export const dist = (a: Point, b: Point): number => Math.hypot(a.x - b.x, a.y - b.y)
-/** a turned +90°. */
-export const perp = (a: Point): Point => ({ x: -a.y, y: a.x })
 export const rotate = (a: Point, rad: number): Point => {
   const c = Math.cos(rad)
   const s = Math.sin(rad)

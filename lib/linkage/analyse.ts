@@ -119,14 +119,25 @@ export function kinematicSamples(cell: InversorCell, e: number, r: number, lo: n
   return out
 }
 
+/** A link's self-weight per mm of length, N/mm: kg/m³ · mm² · 1e-9 m³/mm³ · m/s². */
+export function selfWeightPerMm(sw: { density: number; area: number; g: number }): number {
+  return sw.density * sw.area * 1e-9 * sw.g
+}
+
+/** The self-weight per mm as a vector in its direction, or null without self-weight (what every load case carries). */
+export function weightPerMmOf(sw: AnalyseInput['selfWeight']): { x: number; y: number } | null {
+  if (!sw) return null
+  const perMm = selfWeightPerMm(sw)
+  return { x: perMm * Math.cos(sw.directionDeg * DEG), y: perMm * Math.sin(sw.directionDeg * DEG) }
+}
+
 /** The whole linkage calculation for one inversor cell: geometry, sweep, statics, checks, steps. */
 export function analyse(input: AnalyseInput): AnalyseOutput {
   const { cell, crank: r, offset: e } = input
   const v = assessGeometry(cell, e, r, input.marginDeg)
   const sw = input.selfWeight
-  // kg/m³ · mm² · 1e-9 m³/mm³ per mm of length · m/s² = N per mm.
-  const perMm = sw ? sw.density * sw.area * 1e-9 * sw.g : 0
-  const weightPerMm = sw ? { x: perMm * Math.cos(sw.directionDeg * DEG), y: perMm * Math.sin(sw.directionDeg * DEG) } : null
+  const perMm = sw ? selfWeightPerMm(sw) : 0
+  const weightPerMm = weightPerMmOf(sw)
   const working = v.feasibility.ok ? workingRangeOf(input, v.usable) : null
   // The sweep computes in flat arrays; the envelopes read them, and the result's objects are built once, here.
   const flat = working

@@ -101,14 +101,7 @@ export function solveInPlace(a: Float64Array, n: number, rhs: Float64Array[], to
     }
   }
   start[n] = used
-  for (let q = 0; q < nr; q++) {
-    const b = rhs[q]
-    for (let r = n - 1; r >= 0; r--) {
-      let s = b[r]
-      for (let t = start[r]; t < start[r + 1]; t++) s -= a[r * n + cols[t]] * b[cols[t]]
-      b[r] = s / a[r * n + r]
-    }
-  }
+  backSubstitute(a, n, rhs, cols, start)
   return { ok: true, minPivot }
 }
 
@@ -238,13 +231,17 @@ export function solveMasked(a: Float64Array, n: number, rhs: Float64Array[], scr
     }
   }
   start[n] = used
-  for (let q = 0; q < nr; q++) {
-    const b = rhs[q]
+  backSubstitute(a, n, rhs, cols, start)
+  return { ok: true, minPivot }
+}
+
+/** Back substitution over the upper triangle left by elimination, row r's nonzeros being cols[start[r] … start[r + 1]). */
+function backSubstitute(a: Float64Array, n: number, rhs: Float64Array[], cols: Int32Array, start: Int32Array) {
+  for (const b of rhs) {
     for (let r = n - 1; r >= 0; r--) {
       let s = b[r]
       for (let t = start[r]; t < start[r + 1]; t++) s -= a[r * n + cols[t]] * b[cols[t]]
       b[r] = s / a[r * n + r]
     }
   }
-  return { ok: true, minPivot }
 }

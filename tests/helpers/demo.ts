@@ -1,10 +1,12 @@
 import { eq } from 'drizzle-orm'
+import { afterAll, beforeAll } from 'vitest'
 import { db } from '@/db'
 import { calcs, projects, users } from '@/db/schema'
 import type { Caller } from '@/server/access'
 import { DEMO_USERS } from '@/server/demo/demo-data'
 import { seedDemo } from '@/server/demo/seed'
 import type { RevisionDeps } from '@/server/revisions'
+import { useTempEnvironment } from './temp-env'
 
 export type DemoRole = (typeof DEMO_USERS)[number]['key']
 
@@ -19,4 +21,19 @@ export async function seededDemo(deps?: RevisionDeps) {
   const [project] = await db.select().from(projects).where(eq(projects.code, 'FM-CE40'))
   const calcId = async (number: string) => (await db.select().from(calcs).where(eq(calcs.number, number)))[0].id
   return { people, projectId: project.id, calcId }
+}
+
+/**
+ * A test file's whole set-up: a temporary environment with the demo seeded before its tests and
+ * closed after them. Read the fields inside tests (they are filled in `beforeAll`).
+ */
+export function useSeededDemo(timeoutMs = 120_000) {
+  const demo = {} as Awaited<ReturnType<typeof seededDemo>>
+  let env: Awaited<ReturnType<typeof useTempEnvironment>> | undefined
+  beforeAll(async () => {
+    env = await useTempEnvironment()
+    Object.assign(demo, await seededDemo())
+  }, timeoutMs)
+  afterAll(() => env?.close())
+  return demo
 }

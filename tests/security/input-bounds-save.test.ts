@@ -2,25 +2,14 @@
  * Issue 13: an input outside its bounds is refused at its field through the service that stores the
  * working inputs, and what was saved before is left exactly as it was (row, result and time).
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { describe, expect, it } from 'vitest'
 import { eq } from 'drizzle-orm'
 import { db } from '@/db'
 import { calcs } from '@/db/schema'
-import type { Caller } from '@/server/access'
 import { saveInputs } from '@/server/calcs'
-import { seededDemo, type DemoRole } from '../helpers/demo'
-import { useTempEnvironment } from '../helpers/temp-env'
+import { useSeededDemo } from '../helpers/demo'
 
-let env: Awaited<ReturnType<typeof useTempEnvironment>>
-let people: Record<DemoRole, Caller>
-let projectId = ''
-let calcIdOf: (n: string) => Promise<string>
-
-beforeAll(async () => {
-  env = await useTempEnvironment()
-  ;({ people, projectId, calcId: calcIdOf } = await seededDemo())
-}, 60_000)
-afterAll(() => env.close())
+const demo = useSeededDemo()
 
 type Tree = Record<string, unknown>
 const many = <T>(n: number, f: (i: number) => T) => Array.from({ length: n }, (_, i) => f(i))
@@ -36,9 +25,9 @@ describe('saveInputs refuses out-of-bounds inputs and changes nothing', () => {
     ['defaults.joint.pinDiameter', (i) => ({ ...i, defaults: { ...(i.defaults as Tree), joint: { ...((i.defaults as Tree).joint as Tree), pinDiameter: 1e300 } } })],
   ]
   it.each(cases)('%s', async (path, change) => {
-    const id = await calcIdOf('LC-001')
+    const id = await demo.calcId('LC-001')
     const [before] = await db.select().from(calcs).where(eq(calcs.id, id))
-    const out = await saveInputs(people.engineer, projectId, id, change(structuredClone(before.draftInputs) as Tree))
+    const out = await saveInputs(demo.people.engineer, demo.projectId, id, change(structuredClone(before.draftInputs) as Tree))
     expect(out.ok).toBe(false)
     if (!out.ok) expect(out.fieldErrors[path]).toMatch(/^must (be|hold)/)
     const [after] = await db.select().from(calcs).where(eq(calcs.id, id))

@@ -8,25 +8,14 @@
 import { spawn } from 'node:child_process'
 import { createInterface } from 'node:readline'
 import { eq, inArray } from 'drizzle-orm'
-import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { describe, expect, it } from 'vitest'
 import { db } from '@/db'
 import { renderJobs, revisions } from '@/db/schema'
-import type { Caller } from '@/server/access'
 import { drainRenderJobs } from '@/server/render-jobs'
 import type { RevisionDeps } from '@/server/revisions'
-import { seededDemo, type DemoRole } from '../helpers/demo'
-import { useTempEnvironment } from '../helpers/temp-env'
+import { useSeededDemo } from '../helpers/demo'
 
-let env: Awaited<ReturnType<typeof useTempEnvironment>>
-let people: Record<DemoRole, Caller>
-let projectId = ''
-let calcIdOf: (n: string) => Promise<string>
-
-beforeAll(async () => {
-  env = await useTempEnvironment()
-  ;({ people, projectId, calcId: calcIdOf } = await seededDemo())
-}, 120_000)
-afterAll(() => env.close())
+const demo = useSeededDemo()
 
 const fake: RevisionDeps = {
   renderer: { renderBody: async () => new Uint8Array([37, 80, 68, 70]), finishPdf: async (b) => b },
@@ -35,9 +24,9 @@ const fake: RevisionDeps = {
 
 describe('a crash in the middle of a save', () => {
   it('leaves only whole revisions, each of which gets its package', async () => {
-    const calcId = await calcIdOf('LC-003')
+    const calcId = await demo.calcId('LC-003')
     // Node itself (not npx, whose child would outlive the kill), with tsx as its loader.
-    const child = spawn(process.execPath, ['--import', 'tsx', 'tests/security/kill-during-save.worker.ts', JSON.stringify(people.engineer), projectId, calcId], { env: { ...process.env }, stdio: ['ignore', 'pipe', 'pipe'] })
+    const child = spawn(process.execPath, ['--import', 'tsx', 'tests/security/kill-during-save.worker.ts', JSON.stringify(demo.people.engineer), demo.projectId, calcId], { env: { ...process.env }, stdio: ['ignore', 'pipe', 'pipe'] })
     let stderr = ''
     child.stderr.on('data', (d) => (stderr += String(d)))
     let saved = 0

@@ -8,28 +8,17 @@
 import { spawn } from 'node:child_process'
 import { createInterface } from 'node:readline'
 import { inArray, isNull } from 'drizzle-orm'
-import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { describe, expect, it } from 'vitest'
 import { db } from '@/db'
 import { outbox, renderJobs, revisions } from '@/db/schema'
-import type { Caller } from '@/server/access'
 import { DEMO_CALCS } from '@/server/demo/demo-data'
 import { drainOutbox, enqueueMail } from '@/server/mail/outbox'
 import { drainRenderJobs } from '@/server/render-jobs'
 import { createCalc } from '@/server/calcs'
 import { saveRevision, type RevisionDeps } from '@/server/revisions'
-import { seededDemo, type DemoRole } from '../helpers/demo'
-import { useTempEnvironment } from '../helpers/temp-env'
+import { useSeededDemo } from '../helpers/demo'
 
-let env: Awaited<ReturnType<typeof useTempEnvironment>>
-let people: Record<DemoRole, Caller>
-let projectId = ''
-let calcIdOf: (n: string) => Promise<string>
-
-beforeAll(async () => {
-  env = await useTempEnvironment()
-  ;({ people, projectId, calcId: calcIdOf } = await seededDemo())
-}, 120_000)
-afterAll(() => env.close())
+const demo = useSeededDemo()
 
 const pause = (ms: number) => new Promise((r) => setTimeout(r, ms))
 
@@ -55,10 +44,10 @@ describe('two instances on one database', () => {
   it('each render job and each mail is done exactly once', async () => {
     // Work for both: one revision of each of a dozen calcs (each save queues a render job), and mail.
     // One per calc: a later save would supersede a revision whose package is still queued.
-    const ids = await Promise.all(DEMO_CALCS.map((c) => calcIdOf(c.number)))
-    for (let i = 0; i < 9; i++) ids.push((await createCalc(people.engineer, projectId, { number: `TWO-${i}`, title: `Two instances ${i}`, calcType: i % 2 ? 'hart' : 'peaucellier' })).id)
+    const ids = await Promise.all(DEMO_CALCS.map((c) => demo.calcId(c.number)))
+    for (let i = 0; i < 9; i++) ids.push((await createCalc(demo.people.engineer, demo.projectId, { number: `TWO-${i}`, title: `Two instances ${i}`, calcType: i % 2 ? 'hart' : 'peaucellier' })).id)
     const saved: string[] = []
-    for (const id of ids) saved.push(await saveRevision(people.engineer, projectId, id, A.deps, { reason: 'two instances', confirmFailing: true }))
+    for (const id of ids) saved.push(await saveRevision(demo.people.engineer, demo.projectId, id, A.deps, { reason: 'two instances', confirmFailing: true }))
     for (let i = 0; i < 40; i++) await enqueueMail({ to: `instance${i}@feldmark.example`, subject: `Two instances ${i}`, text: 'x' })
     const jobs = await db.select().from(renderJobs).where(inArray(renderJobs.revisionId, saved))
     expect(jobs).toHaveLength(saved.length)
