@@ -13,7 +13,7 @@ import type { LinkageResult, Step } from '@/lib/contract'
 import { sampleObjects, sweepArrays, type LoadInput } from './sweep'
 import { plain, tex } from './tex'
 import type { Criterion } from '@/lib/contract'
-import { DEG } from './vec'
+import { DEG, mag } from './vec'
 
 export interface AnalyseInput {
   cell: InversorCell
@@ -101,7 +101,7 @@ function minTransmission(cell: InversorCell, j: Record<string, { x: number; y: n
     const uy = j[a].y - j[v].y
     const wx = j[b].x - j[v].x
     const wy = j[b].y - j[v].y
-    const c = (ux * wx + uy * wy) / (Math.hypot(ux, uy) * Math.hypot(wx, wy))
+    const c = (ux * wx + uy * wy) / (mag(ux, uy) * mag(wx, wy))
     const g = Math.acos(Math.min(1, Math.max(-1, c))) / DEG
     min = Math.min(min, g, 180 - g)
   }

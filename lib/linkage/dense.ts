@@ -142,9 +142,9 @@ export const maskScratch = (n: number, pattern: Int32Array): MaskScratch => {
  * pattern, then through swaps and fill-in) and the searches visit those few entries instead of
  * scanning whole columns. An entry outside the masks is exactly zero, which the scans of
  * solveInPlace would skip or leave unchanged. Needs n ≤ MASKED_MAX and every nonzero of A in the
- * scratch's pattern.
+ * scratch's pattern. With `pivots`, writes the row chosen at each step (see planSolve).
  */
-export function solveMasked(a: Float64Array, n: number, rhs: Float64Array[], scratch: MaskScratch, tol = 1e-11): SolveOutcome {
+export function solveMasked(a: Float64Array, n: number, rhs: Float64Array[], scratch: MaskScratch, tol = 1e-11, pivots?: Int32Array): SolveOutcome {
   const { cols, start, pattern, rowMask, colMask } = scratch
   const scale = largestEntry(a, n, pattern)
   if (scale === 0) return { ok: false, minPivot: 0 }
@@ -170,6 +170,7 @@ export function solveMasked(a: Float64Array, n: number, rhs: Float64Array[], scr
     }
     if (bestAbs / scale < minPivot) minPivot = bestAbs / scale
     if (bestAbs <= tol * scale) return { ok: false, minPivot }
+    if (pivots) pivots[c] = best
     if (best !== c) {
       const mc = rowMask[c]
       const mb = rowMask[best]
@@ -244,4 +245,198 @@ function backSubstitute(a: Float64Array, n: number, rhs: Float64Array[], cols: I
       b[r] = s / a[r * n + r]
     }
   }
+}
+
+/**
+ * Partial pivoting's eliminations of one sparsity pattern, recorded as index lists so that a sweep
+ * can replay them (solvePlanned) instead of searching and bookkeeping at every position. Which rows
+ * take part at a step depends on the pivots chosen before it, so the record is a tree: a step holds
+ * the entries partial pivoting compares (every structural nonzero of the column at or below the
+ * diagonal, in its scan order) and, per winner met so far, a branch with that pivot's elimination
+ * and the next step. Rows are never moved: each keeps its storage and the tree knows where it stands.
+ * A sweep meets a few dozen pivot sequences over a thousand positions, sharing most of their steps.
+ */
+export interface SolvePlan {
+  n: number
+  pattern: Int32Array
+  root: PlanStep
+  /** The branch taken at each step of the current solve, for the back-substitution. */
+  path: PlanBranch[]
+  sol: Float64Array
+}
+
+interface PlanStep {
+  c: number
+  /** Positions (row order after the earlier swaps) of the candidates, position c first, and their entries' flat indices. */
+  candPos: Int32Array
+  candSlot: Int32Array
+  /** Per candidate index, the branch where it won; undefined until a solve has chosen it. */
+  branches: (PlanBranch | undefined)[]
+  /** Where the rows stand, and the structural nonzeros by row and by column (bits by position). */
+  perm: Int32Array
+  rowMask: Int32Array
+  colMask: Int32Array
+}
+
+interface PlanBranch {
+  /** Flat index of the pivot and the pivot row's storage row. */
+  pivSlot: number
+  pivRow: number
+  /** The pivot row's entries right of the diagonal (the pattern of U): flat index and column. */
+  uSlot: Int32Array
+  uCol: Int32Array
+  /** The rows it eliminates: the entry in the pivot column and the storage row. */
+  tgtSlot: Int32Array
+  tgtRow: Int32Array
+  next: PlanStep | null
+}
+
+const bitsOf = (m: number): number[] => {
+  const out: number[] = []
+  while (m !== 0) {
+    const low = m & -m
+    m ^= low
+    out.push(31 - Math.clz32(low))
+  }
+  return out
+}
+
+function planStep(n: number, c: number, perm: Int32Array, rowMask: Int32Array, colMask: Int32Array): PlanStep {
+  const pos = [c, ...bitsOf(colMask[c] & ~((2 << c) - 1))]
+  return {
+    c,
+    candPos: Int32Array.from(pos),
+    candSlot: Int32Array.from(pos, (r) => perm[r] * n + c),
+    branches: new Array(pos.length),
+    perm,
+    rowMask,
+    colMask,
+  }
+}
+
+/** The branch of step s where the row at position p wins: swap, pattern of U, targets and their fill-in. */
+function planBranch(n: number, s: PlanStep, p: number): PlanBranch {
+  const c = s.c
+  const perm = s.perm.slice()
+  const rowMask = s.rowMask.slice()
+  const colMask = s.colMask.slice()
+  if (p !== c) {
+    ;[perm[c], perm[p]] = [perm[p], perm[c]]
+    ;[rowMask[c], rowMask[p]] = [rowMask[p], rowMask[c]]
+    for (let k = 0; k < n; k++) {
+      const m = colMask[k]
+      if (((m >>> c) & 1) !== ((m >>> p) & 1)) colMask[k] = m ^ ((1 << c) | (1 << p))
+    }
+  }
+  const above = ~((2 << c) - 1)
+  const rowC = rowMask[c] & above
+  const cols = bitsOf(rowC)
+  const targets = bitsOf(colMask[c] & above)
+  for (const r of targets) {
+    rowMask[r] |= rowC
+    for (const k of cols) colMask[k] |= 1 << r
+  }
+  return {
+    pivSlot: perm[c] * n + c,
+    pivRow: perm[c],
+    uSlot: Int32Array.from(cols, (k) => perm[c] * n + k),
+    uCol: Int32Array.from(cols),
+    tgtSlot: Int32Array.from(targets, (r) => perm[r] * n + c),
+    tgtRow: Int32Array.from(targets, (r) => perm[r]),
+    next: c + 1 < n ? planStep(n, c + 1, perm, rowMask, colMask) : null,
+  }
+}
+
+/** Plans by pattern: a plan depends on nothing else, and every sweep of a mechanism meets the same pivot sequences. */
+const plans = new Map<string, SolvePlan>()
+const PLANS_KEPT = 64
+
+/**
+ * The plan for `pattern`, shared by every solve of that pattern (solvePlanned is synchronous, so
+ * its scratch is never in use twice); solves add to it with recordPivots. Needs n ≤ MASKED_MAX.
+ */
+export function solvePlan(n: number, pattern: Int32Array): SolvePlan {
+  const key = `${n}:${pattern.join()}`
+  let plan = plans.get(key)
+  if (!plan) {
+    if (plans.size >= PLANS_KEPT) plans.clear()
+    const { rowMask0, colMask0 } = maskScratch(n, pattern)
+    const root = planStep(n, 0, Int32Array.from({ length: n }, (_, i) => i), rowMask0.slice(), colMask0.slice())
+    plan = { n, pattern, root, path: new Array(n), sol: new Float64Array(n) }
+    plans.set(key, plan)
+  }
+  return plan
+}
+
+/**
+ * Adds the pivot sequence of a successful solveMasked (its `pivots`) to the plan. Its eliminations
+ * then replay with the same candidates, targets and updates in the same order, the fill-in taken at
+ * every structural nonzero: a superset of what solveMasked visits, the extra entries being exact
+ * zeros, which change no bit.
+ */
+export function recordPivots(plan: SolvePlan, pivots: Int32Array): void {
+  let s: PlanStep | null = plan.root
+  while (s) {
+    const t = s.candPos.indexOf(pivots[s.c])
+    if (t < 0) throw new Error(`pivot ${pivots[s.c]} at step ${s.c} is not a candidate of the pattern`)
+    s = (s.branches[t] ??= planBranch(plan.n, s, pivots[s.c])).next
+  }
+}
+
+/**
+ * solveMasked replayed from a plan: the same pivots (first largest |a| among the candidates), the
+ * same arithmetic in the same order, so the same bits. Returns null, with A and the right-hand sides
+ * part-eliminated, when partial pivoting chooses a branch the plan has not recorded yet: the caller
+ * rebuilds them, solves with solveMasked and records its pivots.
+ */
+export function solvePlanned(plan: SolvePlan, a: Float64Array, rhs: Float64Array[], tol = 1e-11): SolveOutcome | null {
+  const { n, path, sol } = plan
+  const scale = largestEntry(a, n, plan.pattern)
+  if (scale === 0) return { ok: false, minPivot: 0 }
+  const nr = rhs.length
+  let minPivot = Infinity
+  let s: PlanStep | null = plan.root
+  for (let c = 0; c < n; c++) {
+    const cand: Int32Array = s!.candSlot
+    let best = 0
+    let bestAbs = Math.abs(a[cand[0]])
+    for (let t = 1; t < cand.length; t++) {
+      const v = Math.abs(a[cand[t]])
+      if (v > bestAbs) {
+        best = t
+        bestAbs = v
+      }
+    }
+    if (bestAbs / scale < minPivot) minPivot = bestAbs / scale
+    if (bestAbs <= tol * scale) return { ok: false, minPivot }
+    const br: PlanBranch | undefined = s!.branches[best]
+    if (!br) return null
+    path[c] = br
+    const piv = a[br.pivSlot]
+    const pr = br.pivRow
+    const { uSlot, uCol, tgtSlot, tgtRow } = br
+    for (let t = 0; t < tgtSlot.length; t++) {
+      const arc = a[tgtSlot[t]]
+      if (arc === 0) continue
+      const f = arc / piv
+      if (f === 0) continue
+      a[tgtSlot[t]] = 0
+      const row = tgtRow[t]
+      const base = row * n
+      for (let k = 0; k < uSlot.length; k++) a[base + uCol[k]] -= f * a[uSlot[k]]
+      for (let q = 0; q < nr; q++) rhs[q][row] -= f * rhs[q][pr]
+    }
+    s = br.next
+  }
+  for (let q = 0; q < nr; q++) {
+    const b = rhs[q]
+    for (let r = n - 1; r >= 0; r--) {
+      const br = path[r]
+      let x = b[br.pivRow]
+      for (let k = 0; k < br.uSlot.length; k++) x -= a[br.uSlot[k]] * sol[br.uCol[k]]
+      sol[r] = x / a[br.pivSlot]
+    }
+    b.set(sol)
+  }
+  return { ok: true, minPivot }
 }

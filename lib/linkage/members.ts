@@ -1,7 +1,6 @@
-import { firstLongest } from './longest'
 import { linkLength, type LinkageModel } from './model'
 import type { CaseLoads, CaseStatics } from './statics'
-import type { Vec } from './vec'
+import { mag, type Vec } from './vec'
 
 /** Internal forces of one link at one position, from its end forces. */
 export interface MemberForces {
@@ -99,7 +98,7 @@ export function memberForcesInto(
   for (let k = 0; k < np; k++) {
     const fx = f[g + 2 * k]
     const fy = f[g + 2 * k + 1]
-    const m = Math.hypot(fx, fy)
+    const m = mag(fx, fy)
     if (m > eye) {
       eye = m
       eyeAt = k
@@ -119,31 +118,38 @@ type ForceRec = { x: number; y: number; magnitude: number }
 
 /** Per joint, the force on each attached link from the pin; the largest governs. */
 export function pinForces(model: LinkageModel, st: CaseStatics): Record<string, ForceRec> {
-  const f = st.endForces
-  const out: Record<string, ForceRec> = {}
-  for (const { joint, points } of model.jointPoints) {
-    const t = firstLongest(f, points)
-    if (t < 0) return pinForcesByScan(model, st)
-    const i = 2 * points[t]
-    out[joint] = { x: f[i], y: f[i + 1], magnitude: Math.hypot(f[i], f[i + 1]) }
-  }
-  return out
-}
-
-/** pinForces by the plain scan: the definition, and the path for non-finite values. */
-export function pinForcesByScan(model: LinkageModel, st: CaseStatics): Record<string, ForceRec> {
   const out: Record<string, ForceRec> = {}
   const f = st.endForces
   model.links.forEach((l, b) => {
     for (let k = 0; k < l.points.length; k++) {
       const i = 2 * (model.offset[b] + k)
-      const m = Math.hypot(f[i], f[i + 1])
+      const m = mag(f[i], f[i + 1])
       const j = l.points[k]
       const cur = out[j]
       if (!cur || m > cur.magnitude) out[j] = { x: f[i], y: f[i + 1], magnitude: m }
     }
   })
   return out
+}
+
+/**
+ * The pin force of one joint at f[fo …]: the first largest (strict >) of the forces on its points
+ * (flat indices `points`, in link order, as pinForces scans them). Returns the winning point's flat
+ * index and writes its magnitude to out[0].
+ */
+export function pinPointInto(f: Float64Array, fo: number, points: Int32Array, out: Float64Array): number {
+  let best = points[0]
+  let top = mag(f[fo + 2 * best], f[fo + 2 * best + 1])
+  for (let u = 1; u < points.length; u++) {
+    const k = fo + 2 * points[u]
+    const m = mag(f[k], f[k + 1])
+    if (m > top) {
+      best = points[u]
+      top = m
+    }
+  }
+  out[0] = top
+  return best
 }
 
 /** Force the ground applies to the mechanism at each fixed pivot, N. */
@@ -157,7 +163,7 @@ export function groundReactions(model: LinkageModel, st: CaseStatics): Record<st
       x += st.endForces[2 * points[t]]
       y += st.endForces[2 * points[t] + 1]
     }
-    out[j] = { x, y, magnitude: Math.hypot(x, y) }
+    out[j] = { x, y, magnitude: mag(x, y) }
   }
   return out
 }

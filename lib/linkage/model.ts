@@ -61,8 +61,6 @@ export interface LinkageModel extends LinkageDef {
    * reaction results read these instead of searching the links each time.
    */
   jointPoints: { joint: string; points: Int32Array }[]
-  /** 0, 1, … per connection: the connection forces' slots in a solution vector. */
-  connectionSlots: Int32Array
 }
 
 export function buildModel(def: LinkageDef): LinkageModel {
@@ -99,8 +97,7 @@ export function buildModel(def: LinkageDef): LinkageModel {
     joint,
     points: Int32Array.from(bodies, (b) => offset[b] + def.links[b].points.indexOf(joint)),
   }))
-  const connectionSlots = Int32Array.from(connections, (_, i) => i)
-  return { ...def, connections, primary, attached, crankIndex, size, lc, offset, pointCount, connBodyK, connOtherK, jointPoints, connectionSlots }
+  return { ...def, connections, primary, attached, crankIndex, size, lc, offset, pointCount, connBodyK, connOtherK, jointPoints }
 }
 
 /** World positions of every body point, in the flat layout. */

@@ -1,8 +1,7 @@
 import { solveInPlace, solveScratch, type SolveScratch } from './dense'
 import { equilibriumMatrix, equilibriumPattern } from './equations'
-import { firstLongest } from './longest'
 import { linkLength, type LinkageModel } from './model'
-import type { Vec } from './vec'
+import { mag, type Vec } from './vec'
 
 /** Loads of one case: point forces at joints, N, and an optional weight per mm of link, N/mm. */
 export interface CaseLoads {
@@ -70,15 +69,16 @@ export function solveStatics(model: LinkageModel, pts: Float64Array, cases: Case
   const rhs = cases.map((lc, q) => loadsInto(model, pts, lc, ws ? ws.rhs[q].fill(0) : new Float64Array(n)))
   const out = solveInPlace(a, n, rhs, undefined, ws?.solver)
   if (!out.ok) return { ok: false, minPivot: out.minPivot }
-  const largestConnection = rhs.map((x) => {
-    const t = firstLongest(x, model.connectionSlots)
-    if (t >= 0) return Math.max(0, Math.hypot(x[2 * t], x[2 * t + 1]))
-    let m = 0
-    for (let i = 0; i < n - 1; i += 2) m = Math.max(m, Math.hypot(x[i], x[i + 1]))
-    return m
-  })
+  const largest = rhs.map((x) => largestConnection(x, n))
   const detail = rhs.slice(0, detailed).map((x, i) => endForces(model, cases[i], x, ws?.endForces[i].fill(0)))
-  return { ok: true, minPivot: out.minPivot, cases: detail, largestConnection }
+  return { ok: true, minPivot: out.minPivot, cases: detail, largestConnection: largest }
+}
+
+/** Largest connection force |(x[2i], x[2i + 1])| of a solution of size n (the last unknown is the torque), N. */
+export function largestConnection(x: Float64Array, n: number): number {
+  let m = 0
+  for (let i = 0; i < n - 1; i += 2) m = Math.max(m, mag(x[i], x[i + 1]))
+  return m
 }
 
 /** The right-hand side of one load case (b zeroed by the caller): A·x + F = 0. */

@@ -1,13 +1,12 @@
 import type { InversorCell } from './cells/cell'
 import { linkageOf, placeAt } from './crank'
-import { MASKED_MAX, maskScratch, solveInPlace, solveMasked, solveScratch } from './dense'
+import { MASKED_MAX, maskScratch, recordPivots, solveInPlace, solveMasked, solvePlan, solvePlanned, solveScratch, type SolveOutcome } from './dense'
 import { equilibriumMatrix, equilibriumPattern } from './equations'
-import { firstLongest } from './longest'
-import { MEMBER_FIELDS, memberForcesInto, type MemberForces } from './members'
+import { MEMBER_FIELDS, memberForcesInto, pinPointInto, type MemberForces } from './members'
 import { buildModel, type LinkageModel } from './model'
 import type { Force, Point, PositionResult, ToggleFlag } from '@/lib/contract'
-import { endForcesInto, equilibriumResidualAt, loadsInto, type CaseLoads } from './statics'
-import { DEG, type Vec } from './vec'
+import { endForcesInto, equilibriumResidualAt, largestConnection, loadsInto, type CaseLoads } from './statics'
+import { DEG, mag, type Vec } from './vec'
 import { virtualWorkInto, VW_STEP } from './virtual-work'
 
 export interface LoadInput {
@@ -122,15 +121,6 @@ function jointOrder(cell: InversorCell, e: number, r: number, anglesDeg: number[
   return null
 }
 
-/** Largest connection force of a solution (see solveStatics' largestConnection). */
-function largestConnection(model: LinkageModel, x: Float64Array): number {
-  const t = firstLongest(x, model.connectionSlots)
-  if (t >= 0) return Math.max(0, Math.hypot(x[2 * t], x[2 * t + 1]))
-  let m = 0
-  for (let i = 0; i < model.size - 1; i += 2) m = Math.max(m, Math.hypot(x[i], x[i + 1]))
-  return m
-}
-
 /**
  * The sweep with statics in flat typed arrays: per position the closed-form joints, one
  * factorisation of the equilibrium matrix (built in one reused matrix, solved in place) for every
@@ -195,6 +185,25 @@ export function sweepArrays(input: SweepInput): SweepArrays {
   const before = new Float64Array(2 * nj)
   const after = new Float64Array(2 * nj)
   const vw = new Float64Array(2)
+  // Partial pivoting's eliminations met so far, replayed at the next positions (see SolvePlan).
+  const plan = masked ? solvePlan(n, pattern) : null
+  const pivots = new Int32Array(n)
+  const build = () => {
+    equilibriumMatrix(model, pts, a)
+    for (let q = 0; q < solved.length; q++) loadsInto(model, pts, solved[q], rhs[q].fill(0))
+  }
+  /** Statics at the position in pts, into rhs: replayed from the plan, or solved and recorded. */
+  const solveAt = (): SolveOutcome => {
+    build()
+    if (!masked || !plan) return solveInPlace(a, n, rhs, undefined, scratch)
+    const fast = solvePlanned(plan, a, rhs)
+    if (fast) return fast
+    build()
+    const out = solveMasked(a, n, rhs, masked, undefined, pivots)
+    if (out.ok) recordPivots(plan, pivots)
+    return out
+  }
+  const top = new Float64Array(1)
   let count = 0
   for (const deg of anglesDeg) {
     const th = deg * DEG
@@ -208,13 +217,11 @@ export function sweepArrays(input: SweepInput): SweepArrays {
       pts[2 * i] = joints[q]
       pts[2 * i + 1] = joints[q + 1]
     }
-    equilibriumMatrix(model, pts, a)
-    for (let q = 0; q < solved.length; q++) loadsInto(model, pts, solved[q], rhs[q].fill(0))
-    if (!(masked ? solveMasked(a, n, rhs, masked) : solveInPlace(a, n, rhs, undefined, scratch)).ok) {
+    if (!solveAt().ok) {
       toggles.push({ crankDeg: deg, reason: 'singular' })
       continue
     }
-    const amplification = Math.max(largestConnection(model, rhs[nc]), largestConnection(model, rhs[nc + 1]))
+    const amplification = Math.max(largestConnection(rhs[nc], n), largestConnection(rhs[nc + 1], n))
     if (amplification > input.amplificationLimit) {
       toggles.push({ crankDeg: deg, reason: 'force-amplification', amplification })
       continue
@@ -231,7 +238,7 @@ export function sweepArrays(input: SweepInput): SweepArrays {
       const uy = joints[jo + 2 * p + 1] - vy
       const wx = joints[jo + 2 * q] - vx
       const wy = joints[jo + 2 * q + 1] - vy
-      const c = (ux * wx + uy * wy) / (Math.hypot(ux, uy) * Math.hypot(wx, wy))
+      const c = (ux * wx + uy * wy) / (mag(ux, uy) * mag(wx, wy))
       const g = Math.acos(Math.min(1, Math.max(-1, c))) / DEG
       const t = Math.min(g, 180 - g)
       angles[i * nw + w] = t
@@ -249,26 +256,8 @@ export function sweepArrays(input: SweepInput): SweepArrays {
       for (let b = 0; b < nl; b++) memberForcesInto(model, pts, b, lc.weightPerMm, cs.endForces, fo, torque, cs.members, (i * nl + b) * MEMBER_FIELDS)
       const f = cs.endForces
       for (let jp = 0; jp < njp; jp++) {
-        const points = model.jointPoints[jp].points
-        let t = firstLongest(f, points, fo)
-        let mag: number
-        if (t >= 0) {
-          const k = fo + 2 * points[t]
-          mag = Math.hypot(f[k], f[k + 1])
-        } else {
-          // The plain scan, as pinForcesByScan: the first longest by Math.hypot, strict >.
-          t = 0
-          mag = Math.hypot(f[fo + 2 * points[0]], f[fo + 2 * points[0] + 1])
-          for (let u = 1; u < points.length; u++) {
-            const m = Math.hypot(f[fo + 2 * points[u]], f[fo + 2 * points[u] + 1])
-            if (m > mag) {
-              t = u
-              mag = m
-            }
-          }
-        }
-        cs.pinPoint[i * njp + jp] = points[t]
-        cs.pinMagnitude[i * njp + jp] = mag
+        cs.pinPoint[i * njp + jp] = pinPointInto(f, fo, model.jointPoints[jp].points, top)
+        cs.pinMagnitude[i * njp + jp] = top[0]
       }
       for (let g = 0; g < grounds.length; g++) {
         const points = groundPoints[g]
@@ -281,7 +270,7 @@ export function sweepArrays(input: SweepInput): SweepArrays {
         const k = (i * grounds.length + g) * 3
         cs.reactions[k] = rx
         cs.reactions[k + 1] = ry
-        cs.reactions[k + 2] = Math.hypot(rx, ry)
+        cs.reactions[k + 2] = mag(rx, ry)
       }
       cs.residual[i] = equilibriumResidualAt(model, pts, lc.weightPerMm, f, fo, torque)
       if (moved) {

@@ -1,6 +1,6 @@
 import { linkLength, type LinkageModel } from './model'
 import type { CaseLoads } from './statics'
-import { dot, norm, type Vec } from './vec'
+import { dot, mag, norm, type Vec } from './vec'
 
 /** Central-difference step in crank angle, rad: small enough for 1e-9, large enough for rounding. */
 export const VW_STEP = 1e-5
@@ -74,7 +74,7 @@ export function virtualWorkInto(
     const vx = (after[i] - before[i]) / h
     const vy = (after[i + 1] - before[i + 1]) / h
     power += p.force.x * vx + p.force.y * vy
-    scale += Math.hypot(p.force.x, p.force.y) * Math.hypot(vx, vy)
+    scale += mag(p.force.x, p.force.y) * mag(vx, vy)
   }
   const w = loads.weightPerMm
   if (w) {
@@ -88,7 +88,7 @@ export function virtualWorkInto(
       const vx = (ax + bx) / 2
       const vy = (ay + by) / 2
       power += linkLength(l) * (w.x * vx + w.y * vy)
-      scale += linkLength(l) * Math.hypot(w.x, w.y) * Math.hypot(vx, vy)
+      scale += linkLength(l) * mag(w.x, w.y) * mag(vx, vy)
     }
   }
   out[0] = -power

@@ -10,7 +10,11 @@ import os from 'node:os'
 import { calculate } from '@/lib/calc/run'
 import { mechanismInputSchema, type MechanismInput } from '@/lib/calc/mechanism'
 import { DEMO_CALCS } from '@/lib/demo/calcs'
-import { placeAt } from '@/lib/linkage/crank'
+import { linkageOf, placeAt } from '@/lib/linkage/crank'
+import { maskScratch, recordPivots, solveMasked, solvePlan, solvePlanned } from '@/lib/linkage/dense'
+import { equilibriumMatrix, equilibriumPattern } from '@/lib/linkage/equations'
+import { buildModel, pointsFromJoints } from '@/lib/linkage/model'
+import type { InversorCell } from '@/lib/linkage/cells/cell'
 import { runSweep, sweepArrays } from '@/lib/linkage/sweep'
 import { DEG } from '@/lib/linkage/vec'
 import { getMechanism } from '@/lib/mechanisms'
@@ -32,6 +36,32 @@ const CASES: MechanismInput[] = [
 ]
 
 
+/**
+ * The part of the sweep that is the equilibrium solve: the matrix built and solved (three
+ * right-hand sides, the case and the two unit probes, replayed from the elimination plan) at every
+ * position, the positions placed beforehand.
+ */
+function solvesAlone(cell: InversorCell, crank: number, offset: number, anglesDeg: number[]): () => void {
+  const model = buildModel(linkageOf(cell, offset, crank))
+  const n = model.size
+  const pattern = equilibriumPattern(model)
+  const pts = anglesDeg.flatMap((d) => {
+    const j = placeAt(cell, offset, crank, d * DEG)
+    return j ? [pointsFromJoints(model, j)] : []
+  })
+  const a = new Float64Array(n * n)
+  const rhs = [0, 1, 2].map(() => new Float64Array(n))
+  const plan = solvePlan(n, pattern)
+  const pivots = new Int32Array(n)
+  const solve = (p: Float64Array) => {
+    equilibriumMatrix(model, p, a)
+    rhs.forEach((b, q) => b.fill(0)[n - 1 - q] = 1)
+    return solvePlanned(plan, a, rhs)
+  }
+  for (const p of pts) if (!solve(p) && solveMasked(equilibriumMatrix(model, p), n, rhs, maskScratch(n, pattern), undefined, pivots).ok) recordPivots(plan, pivots)
+  return () => pts.forEach(solve)
+}
+
 const ms = (x: number) => (x < 1 ? x.toFixed(3) : x.toFixed(2))
 const load = () => os.loadavg().map((x) => x.toFixed(2)).join(' ')
 
@@ -47,6 +77,11 @@ export default function bench(): void {
       console.log(`  ${label.padEnd(50)} median ${ms(m.wall).padStart(7)} ms (cpu ${ms(m.cpu)} ms)  ×${(m.wall / yard.wall).toFixed(1)} the yardstick`)
     console.log(`${input.mechanism}: ${s.count} positions`)
     line('yardstick: closed-form positions alone', yard)
+    line('positions placed flat, ×3 (each and its two virtual-work neighbours)', measure(() => {
+      const out = new Float64Array(16)
+      for (const a of anglesDeg) for (const d of [-1e-5, 0, 1e-5]) cell.placeInto?.(offset + crank * Math.cos(a * DEG + d), crank * Math.sin(a * DEG + d), out, 0)
+    }, 20, 60))
+    line('equilibrium solves alone (3 right-hand sides each)', measure(solvesAlone(cell, crank, offset, anglesDeg), 20, 60))
     line('sweep with statics, flat (as analyse() runs it)', measure(() => sweepArrays(sweepInput), 20, 60))
     line('runSweep: the same plus every CaseSample object', measure(() => runSweep(sweepInput), 10, 40))
   }

@@ -4,7 +4,7 @@ import { hartCell } from '@/lib/linkage/cells/hart'
 import type { InversorCell } from '@/lib/linkage/cells/cell'
 import { runSweep, sampleObjects, sweepArrays, type SweepInput } from '@/lib/linkage/sweep'
 import { envelopeOf, envelopeOfArrays } from '@/lib/linkage/envelope'
-import { maskScratch, solveInPlace, solveMasked, solveScratch } from '@/lib/linkage/dense'
+import { maskScratch, recordPivots, solveInPlace, solveMasked, solvePlan, solvePlanned, solveScratch } from '@/lib/linkage/dense'
 import { referenceSweep } from './_reference-sweep'
 
 /*
@@ -96,5 +96,41 @@ describe('solveMasked against solveInPlace', () => {
       expect(got).toEqual(ref)
       if (ref.ok) b1.forEach((b, q) => expect(Array.from(b2[q])).toEqual(Array.from(b)))
     }
+  })
+
+  it('solvePlanned replays solveMasked bit for bit, and declines a pivot sequence it has not recorded', () => {
+    const next = rng(34)
+    let replayed = 0
+    let declined = 0
+    for (let trial = 0; trial < 300; trial++) {
+      const n = 2 + Math.floor(next() * 29)
+      const at = new Set<number>()
+      for (let i = 0; i < n; i++) at.add(i * n + Math.floor(next() * n))
+      while (at.size < Math.min(Math.floor(n * (1.5 + next() * 2)), n * n)) at.add(Math.floor(next() * n * n))
+      const pattern = Int32Array.from([...at].sort((x, y) => x - y))
+      const plan = solvePlan(n, pattern)
+      const pivots = new Int32Array(n)
+      // Several matrices of one pattern: ties and exact zeros now and then, so pivot sequences repeat and differ.
+      for (let m = 0; m < 6; m++) {
+        const a = new Float64Array(n * n)
+        for (const p of pattern) a[p] = next() < 0.1 ? 0 : next() < 0.5 ? Math.round(next() * 6 - 3) : next() * 2 - 1
+        const b = [0, 1].map(() => Float64Array.from({ length: n }, () => next() - 0.5))
+        const ref = b.map((x) => x.slice())
+        const refOut = solveMasked(a.slice(), n, ref, maskScratch(n, pattern), undefined, pivots)
+        const mine = b.map((x) => x.slice())
+        const out = solvePlanned(plan, a.slice(), mine)
+        if (out === null) {
+          declined++
+          if (refOut.ok) recordPivots(plan, pivots)
+          continue
+        }
+        replayed++
+        expect(out).toEqual(refOut)
+        if (refOut.ok) ref.forEach((x, q) => expect(Array.from(mine[q])).toEqual(Array.from(x)))
+      }
+    }
+    // Both paths are exercised.
+    expect(replayed).toBeGreaterThan(100)
+    expect(declined).toBeGreaterThan(100)
   })
 })

@@ -1,4 +1,4 @@
-import { add, norm, perp, scale, type Vec } from '../vec'
+import { add, mag, norm, perp, scale, type Vec } from '../vec'
 import { tex } from '../tex'
 import { inRing, sqrt0, type InversorCell } from './cell'
 
@@ -71,7 +71,7 @@ export function hartCell(g: HartGeometry): InversorCell {
     },
     joints: ['O', 'P', 'T', 'A', 'B', 'D', 'E'],
     placeInto(px: number, py: number, out: Float64Array, o: number): boolean {
-      const rho = Math.hypot(px, py)
+      const rho = mag(px, py)
       if (invalid || !inRing(rho, rhoMin, rhoMax)) return false
       const inv = 1 / rho
       const ux = px * inv

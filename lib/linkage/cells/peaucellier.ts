@@ -1,4 +1,4 @@
-import { add, norm, perp, scale, type Vec } from '../vec'
+import { add, mag, norm, perp, scale, type Vec } from '../vec'
 import { tex } from '../tex'
 import { inRing, sqrt0, type InversorCell } from './cell'
 
@@ -63,7 +63,7 @@ export function peaucellierCell(g: PeaucellierGeometry): InversorCell {
     },
     joints: ['O', 'P', 'A', 'B', 'T'],
     placeInto(px: number, py: number, out: Float64Array, at: number): boolean {
-      const rho = Math.hypot(px, py)
+      const rho = mag(px, py)
       if (invalid || !inRing(rho, rhoMin, rhoMax)) return false
       const inv = 1 / rho
       const ux = px * inv
