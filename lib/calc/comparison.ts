@@ -5,7 +5,7 @@
  */
 import type { CalcResult, Step, Table } from '@/lib/contract'
 import { compareStraightLineMechanisms, exactRow, tableRow, type Comparison, type ExactCellRow } from '@/lib/fourbar'
-import { mechanismLabel } from '@/lib/mechanisms'
+import { fourBars, mechanismLabel } from '@/lib/mechanisms'
 
 /** The comparison's steps (in the appendix: the table carries the figures) and table, or nothing when the calc has no solved positions. */
 export function mechanismComparison(result: Pick<CalcResult, 'mechanism' | 'feasibility' | 'positions' | 'steps' | 'links' | 'envelope' | 'straightness' | 'workingRange'>, load: { fx: number; fy: number }, requiredStroke?: number): { steps: Step[]; tables: Table[] } {
@@ -37,15 +37,17 @@ export function mechanismComparison(result: Pick<CalcResult, 'mechanism' | 'feas
 }
 
 /**
- * The four-bars depend on the stroke and the load only, not on the cell: the bench recomputes the calc
- * as the engineer types the cell's sizes, so the last few are kept (they are about two thirds of a calc's time).
+ * The four-bars (every one the registry offers, each sized by its rule) depend on the stroke and the
+ * load only, not on the cell: the bench recomputes the calc as the engineer types the cell's sizes,
+ * so the last few are kept (they are about two thirds of a calc's time).
  */
 const fourBarCache = new Map<string, Comparison>()
 function fourBarsFor(stroke: number, load: { fx: number; fy: number }): Comparison {
-  const key = `${stroke}|${load.fx}|${load.fy}`
+  const offered = fourBars()
+  const key = `${stroke}|${load.fx}|${load.fy}|${offered.map((f) => f.id).join()}`
   let c = fourBarCache.get(key)
   if (!c) {
-    c = compareStraightLineMechanisms({ stroke, load })
+    c = compareStraightLineMechanisms({ stroke, load, fourBars: offered.map((f) => f.size(stroke, f.rule)) })
     if (fourBarCache.size >= 8) fourBarCache.delete(fourBarCache.keys().next().value!)
     fourBarCache.set(key, c)
   }

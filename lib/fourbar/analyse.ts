@@ -1,5 +1,5 @@
 /**
- * Sizes one approximate straight-line four-bar for a stroke and analyses it over the working stroke:
+ * Analyses one approximate straight-line four-bar, sized for a stroke, over the working stroke:
  * the tracer path, its straightness (largest distance from the total-least-squares line), the
  * footprint, the drive angle range and the static forces under a load at the tracer, each position's
  * drive torque checked by virtual work.
@@ -7,7 +7,7 @@
 import type { Point } from '@/lib/contract'
 import { add, dist, fitLine, norm, offsetFrom, rotate, type LineFit } from './geometry'
 import { poseAt, staticsAt, type FourBar, type FourBarPose } from './model'
-import { sizeFourBar, type FourBarName, type FourBarRules, type SizedFourBar } from './linkages'
+import type { SizedFourBar } from './linkages'
 
 export interface FourBarOptions {
   /** Stroke the machine needs along the line, mm. */
@@ -18,11 +18,9 @@ export interface FourBarOptions {
   positions?: number
   /**
    * Where the line lies: the middle of the stroke at `point` (default the origin), the line along
-   * `angleDeg` from +x (default 0). The mechanism's frame sits on its own side of the line (see `sizeFourBar`).
+   * `angleDeg` from +x (default 0). The mechanism's frame sits on its own side of the line (see SizedFourBar).
    */
   line?: { point?: Point; angleDeg?: number }
-  /** Proportions of the mechanisms whose scale is a choice; see DEFAULT_RULES. */
-  rules?: FourBarRules
 }
 
 /** Points equally spaced along the stroke at which the straightness is evaluated. */
@@ -52,7 +50,7 @@ export interface Peak {
 }
 
 export interface FourBarResult {
-  name: FourBarName
+  name: string
   label: string
   source: string
   proportions: string
@@ -148,12 +146,11 @@ function angleForX(m: FourBar, theta0: number, target: number): number {
   throw new Error(`the tracer does not reach x = ${target} mm on this branch`)
 }
 
-/** Sizes and analyses one four-bar. */
-export function analyseFourBar(name: FourBarName, opts: FourBarOptions): FourBarResult {
+/** Analyses one four-bar sized for opts.stroke (lib/mechanisms: `getFourBar(id).size(S, rule)`). */
+export function analyseFourBar(sized: SizedFourBar, opts: FourBarOptions): FourBarResult {
   const S = opts.stroke
   if (!(S > 0) || !Number.isFinite(S)) throw new Error('stroke must be a positive number of mm')
   const n = Math.max(3, Math.floor(opts.positions ?? 181))
-  const sized: SizedFourBar = sizeFourBar(name, S, opts.rules)
   const m = sized.model
   const angle = ((opts.line?.angleDeg ?? 0) * Math.PI) / 180
   const origin = opts.line?.point ?? { x: 0, y: 0 }
@@ -253,7 +250,7 @@ export function analyseFourBar(name: FourBarName, opts: FourBarOptions): FourBar
 
   const BT = Math.hypot(m.tracer.along, m.tracer.across)
   return {
-    name,
+    name: sized.name,
     label: sized.label,
     source: sized.source,
     proportions: sized.proportions,

@@ -1,11 +1,11 @@
 /**
- * "Choice of mechanism": the four approximate straight-line four-bars sized for the same stroke and
- * load, beside rows for the exact cells that the caller supplies, as one table, with a step per
- * four-bar for its straightness error.
+ * "Choice of mechanism": approximate straight-line four-bars sized for the same stroke (the caller
+ * sizes them, from the registry in lib/mechanisms) and loaded alike, beside rows for the exact cells
+ * that the caller supplies, as one table, with a step per four-bar for its straightness error.
  */
 import type { Point, Step, Table } from '@/lib/contract'
 import { analyseFourBar, type FourBarOptions, type FourBarResult } from './analyse'
-import { FOURBAR_NAMES, type FourBarRules } from './linkages'
+import type { SizedFourBar } from './linkages'
 
 /** A row for an exact cell (Peaucellier–Lipkin, Hart), from the caller's own calc. */
 export interface ExactCellRow {
@@ -52,7 +52,8 @@ export interface ComparisonInput {
   load: { fx: number; fy: number }
   positions?: number
   line?: { point?: Point; angleDeg?: number }
-  rules?: FourBarRules
+  /** The four-bars, each sized for `stroke`, in table order. */
+  fourBars: SizedFourBar[]
   /** Rows of the exact cells, printed after the four-bars. */
   exactCells?: ExactCellRow[]
 }
@@ -132,10 +133,10 @@ export function tableRow(r: ComparisonRow): Table['rows'][number] {
   }
 }
 
-/** Sizes the four four-bars for the stroke and load and builds the "Choice of mechanism" table. */
+/** Analyses the sized four-bars under the stroke and load and builds the "Choice of mechanism" table. */
 export function compareStraightLineMechanisms(input: ComparisonInput): Comparison {
-  const opts: FourBarOptions = { stroke: input.stroke, load: input.load, positions: input.positions, line: input.line, rules: input.rules }
-  const fourBars = FOURBAR_NAMES.map((name) => analyseFourBar(name, opts))
+  const opts: FourBarOptions = { stroke: input.stroke, load: input.load, positions: input.positions, line: input.line }
+  const fourBars = input.fourBars.map((sized) => analyseFourBar(sized, opts))
   const rows: ComparisonRow[] = fourBars.map((r) => ({
     kind: 'four-bar',
     id: r.name,

@@ -5,14 +5,21 @@
  * Adding a mechanism: its folder here (geometry schema, fields, defaults, model), its report folder
  * `reports/mechanisms/<id>/` (template.mdx), and one row in BUILT_IN below. Tests and plug-ins may
  * add one at run time with `registerMechanism`.
+ *
+ * The approximate straight-line four-bars that every package compares with the calc's cell are a
+ * second list: a folder each (its sizing rule) and one row in FOUR_BARS, or `registerFourBar`.
  */
 import { STEP_SECTIONS } from '@/lib/contract'
+import { chebyshev } from './chebyshev'
 import { hart } from './hart'
+import { hoeken } from './hoeken'
 import { peaucellier } from './peaucellier'
-import type { GeometrySchema, MechanismDef, MechanismId, MechanismInputOf } from './types'
+import { roberts } from './roberts'
+import { watt } from './watt'
+import type { FourBarDef, GeometrySchema, MechanismDef, MechanismId, MechanismInputOf } from './types'
 
-export type { GeometryField, Geometry, GeometrySchema, MechanismDef, MechanismId, MechanismInputOf, MechanismModel } from './types'
-export { defineMechanism } from './types'
+export type { FourBarDef, GeometryField, Geometry, GeometrySchema, MechanismDef, MechanismId, MechanismInputOf, MechanismModel } from './types'
+export { defineFourBar, defineMechanism } from './types'
 export { CRANK_FIELDS, crankShape, withCrank } from './crank'
 export { fraction, nonNegative, num, positive } from './numbers'
 
@@ -80,4 +87,27 @@ export function mechanismComponents(id: string): { joints: string[]; links: stri
   const names = new Set(cell.links.flatMap((l) => l.points))
   names.delete('O')
   return { joints: ['O', 'C', ...[...names].sort()], links: [...cell.links.map((l) => l.name), 'CP'] }
+}
+
+/** The four-bars of the "Choice of mechanism", in the order the table lists them. */
+const FOUR_BARS = [watt, chebyshev, roberts, hoeken] as const
+
+const fourBarRegistry = new Map<string, FourBarDef>(FOUR_BARS.map((f) => [f.id, f as unknown as FourBarDef]))
+
+/** Adds a four-bar to the comparison at run time (tests, plug-ins). Ids are unique; the same definition twice is a no-op. */
+export function registerFourBar<R extends Record<string, number>>(def: FourBarDef<R>): void {
+  const known = fourBarRegistry.get(def.id)
+  if (known && known !== (def as unknown)) throw new Error(`four-bar "${def.id}" is already registered`)
+  if (!/^[a-z][a-z0-9-]*$/.test(def.id)) throw new Error(`four-bar id "${def.id}" must be lower-case letters, digits and -`)
+  fourBarRegistry.set(def.id, def as unknown as FourBarDef)
+}
+
+export function fourBars(): FourBarDef[] {
+  return [...fourBarRegistry.values()]
+}
+
+export function getFourBar(id: string): FourBarDef {
+  const def = fourBarRegistry.get(id)
+  if (!def) throw new Error(`unknown four-bar "${id}": one of ${[...fourBarRegistry.keys()].join(', ')}`)
+  return def
 }

@@ -7,6 +7,7 @@ import type { z } from 'zod'
 import type { InversorCell } from '@/lib/linkage/cells/cell'
 import type { MechanismId } from '@/lib/contract'
 import type { NumberRange } from '@/lib/bench/ranges'
+import type { SizedFourBar } from '@/lib/fourbar/linkages'
 
 export type { MechanismId }
 
@@ -65,3 +66,23 @@ export function defineMechanism<S extends GeometrySchema, I extends MechanismId>
 
 /** The `{ mechanism, geometry }` part of a calc input for one declared mechanism. */
 export type MechanismInputOf<M> = M extends MechanismDef<infer S, infer I> ? { mechanism: I; geometry: z.input<S> } : never
+
+/**
+ * An approximate straight-line four-bar offered beside the exact cells in every package's "Choice of
+ * mechanism" (not a calc mechanism of its own): a published linkage sized for the calc's stroke by
+ * a rule, then analysed by lib/fourbar (tracer path, straightness, forces).
+ */
+export interface FourBarDef<R extends Record<string, number> = Record<string, number>> {
+  /** Stable id (`watt`, …): the comparison's step ids are `cmp.<id>.straightness`. */
+  id: string
+  label: string
+  /** Proportions that are a choice, as multiples of the stroke; the comparison uses these. */
+  rule: R
+  /** The linkage sized for stroke S (mm) by `rule`, in its own frame (see SizedFourBar). */
+  size(S: number, rule: R): SizedFourBar
+}
+
+/** Declares a four-bar, its sizing type-checked against its rule. */
+export function defineFourBar<R extends Record<string, number>>(def: FourBarDef<R>): FourBarDef<R> {
+  return def
+}

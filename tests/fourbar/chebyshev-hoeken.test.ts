@@ -4,7 +4,8 @@
  * against facts worked by hand and against an independent solution by complex-number loop closure.
  */
 import { describe, expect, it } from 'vitest'
-import { analyseFourBar, poseAt, sizeFourBar } from '@/lib/fourbar'
+import { poseAt } from '@/lib/fourbar'
+import { analysed, sized } from '../helpers/fourbar'
 
 type C = { x: number; y: number }
 const deg = Math.PI / 180
@@ -33,7 +34,7 @@ function chebyshevByLoopClosure(theta: number): C | null {
 }
 
 describe("Chebyshev's linkage, 1 : 2.5 : 2 (coupler : links : frame), tracer at the coupler's middle", () => {
-  const s = sizeFourBar('chebyshev', 2, { chebyshev: { usable: 1 } }) // u = 1: the published numbers
+  const s = sized('chebyshev', 2, { usable: 1 }) // u = 1: the published numbers
   const raw = (theta: number) => {
     const p = poseAt(s.model, theta)!
     return { x: p.T.x + 1, y: p.T.y + 2, p } // the sized frame puts the middle tracer point (1, 2) at the origin
@@ -77,7 +78,7 @@ describe("Chebyshev's linkage, 1 : 2.5 : 2 (coupler : links : frame), tracer at 
     let dense = 0
     for (let th = Math.atan2(1.5, 2); th <= 90 * deg; th += 0.001 * deg) dense = Math.max(dense, Math.abs(chebyshevByLoopClosure(th)!.y - 2))
     // The analysed path (sized for a stroke of 150 mm: u = 75) scaled back to u = 1.
-    const r = analyseFourBar('chebyshev', { stroke: 150, load: { fx: 0, fy: 0 }, rules: { chebyshev: { usable: 1 } } })
+    const r = analysed('chebyshev', { stroke: 150, load: { fx: 0, fy: 0 } }, { usable: 1 })
     const fromPath = Math.max(...r.path.map((p) => Math.abs(p.y))) / 75
     expect(fromPath).toBeCloseTo(dense, 7)
     expect(dense / 2).toBeGreaterThan(0.001)
@@ -93,7 +94,7 @@ describe("Hoeken's linkage is the cognate of Chebyshev's (Roberts–Chebyshev co
     // Chebyshev: O_A = (0, 0), O_B = (2, 0), A B the coupler, P its middle. Parallelogram O_A A P A1 gives
     // A1 = O_A + (P − A), |O_A A1| = |AP| = 0.5. Claim: with O_C = (1, 0) and C1 the middle of A1 P,
     // |O_C C1| = 1.25 at every position, |A1 C1| = 1.25, |A1 P| = 2.5: Hoeken's 1 : 2.5 : 2.5 : 2 : 5 halved.
-    const s = sizeFourBar('chebyshev', 2, { chebyshev: { usable: 1 } })
+    const s = sized('chebyshev', 2, { usable: 1 })
     let worst = 0
     for (let th = Math.atan2(1.5, 2); th <= 90 * deg; th += 0.25 * deg) {
       const p = poseAt(s.model, th)!
@@ -109,8 +110,8 @@ describe("Hoeken's linkage is the cognate of Chebyshev's (Roberts–Chebyshev co
   it("Hoeken's tracer runs on Chebyshev's curve for the same stroke: same path, same straightness error (similarity: scale 1 at equal strokes)", () => {
     const S = 150
     const load = { fx: 0, fy: -140 }
-    const h = analyseFourBar('hoeken', { stroke: S, load })
-    const c = analyseFourBar('chebyshev', { stroke: S, load, rules: { chebyshev: { usable: 1 } } })
+    const h = analysed('hoeken', { stroke: S, load })
+    const c = analysed('chebyshev', { stroke: S, load }, { usable: 1 })
     // Both frames put the middle of the stroke at the origin and the line along x; the curve is symmetric about x = 0.
     for (let i = 0; i < h.path.length; i += 50) expect(Math.abs(h.path[i].y - c.path[c.path.length - 1 - i].y)).toBeLessThan(1e-7)
     expect(h.straightness.error).toBeCloseTo(c.straightness.error, 7)
@@ -119,7 +120,7 @@ describe("Hoeken's linkage is the cognate of Chebyshev's (Roberts–Chebyshev co
   })
 
   it('proportions: crank 1, coupler 2.5, rocker 2.5, frame 2, tracer 5 from the crank pin on the coupler extended (published)', () => {
-    const { model } = sizeFourBar('hoeken', 4) // u = 1
+    const { model } = sized('hoeken', 4) // u = 1
     expect(model.a).toBeCloseTo(1, 14)
     expect(model.b).toBeCloseTo(2.5, 14)
     expect(model.c).toBeCloseTo(2.5, 14)
@@ -129,7 +130,7 @@ describe("Hoeken's linkage is the cognate of Chebyshev's (Roberts–Chebyshev co
   })
 
   it('the crank turns half a turn, 90° to 270°, over the straight part (worked by hand: T (4, 4) at A B ⟂ up, (2, 4) at 180°, (0, 4) at 270°)', () => {
-    const r = analyseFourBar('hoeken', { stroke: 150, load: { fx: 0, fy: 0 } })
+    const r = analysed('hoeken', { stroke: 150, load: { fx: 0, fy: 0 } })
     expect(r.inputRange.fromDeg).toBeCloseTo(90, 9)
     expect(r.inputRange.toDeg).toBeCloseTo(270, 9)
     // A turning crank: the crank is the shortest link and s + l ≤ p + q (Grashof: 1 + 2.5 ≤ 2.5 + 2).

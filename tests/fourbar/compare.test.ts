@@ -1,11 +1,13 @@
 import { describe, expect, it } from 'vitest'
 import { compareStraightLineMechanisms } from '@/lib/fourbar'
+import { sized } from '../helpers/fourbar'
 
 describe('comparison "Choice of mechanism"', () => {
   const cmp = compareStraightLineMechanisms({
     stroke: 150,
     load: { fx: 0, fy: -140 },
     positions: 61,
+    fourBars: ['watt', 'chebyshev', 'roberts', 'hoeken'].map((id) => sized(id, 150)),
     exactCells: [
       { name: 'Peaucellier–Lipkin cell', links: 8, pins: 6, footprint: { width: 300, height: 200 }, straightness: 0, straightnessBasis: 'ideal', peakPinForce: 400, peakTorque: -9000 },
     ],

@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest'
-import { analyseFourBar, FOURBAR_NAMES, poseAt, sizeFourBar, staticsAt } from '@/lib/fourbar'
+import { poseAt, staticsAt } from '@/lib/fourbar'
+import { analysed, sized } from '../helpers/fourbar'
+import { fourBars } from '@/lib/mechanisms'
+
+const fourBarIds = fourBars().map((f) => f.id)
 
 const cross = (a: { x: number; y: number }, b: { x: number; y: number }) => a.x * b.y - a.y * b.x
 const loads = [
@@ -9,10 +13,10 @@ const loads = [
 ]
 
 describe('statics of the four-bars', () => {
-  for (const name of FOURBAR_NAMES) {
+  for (const name of fourBarIds) {
     it(`${name}: drive torque equals −F·dT/dθ at every position (virtual work)`, () => {
       for (const load of loads) {
-        const r = analyseFourBar(name, { stroke: 150, load, positions: 91 })
+        const r = analysed(name, { stroke: 150, load, positions: 91 })
         for (const p of r.positions) {
           expect(Math.abs(p.torque - p.torqueByVirtualWork)).toBeLessThan(1e-6 * Math.max(p.virtualWorkScale, 1))
         }
@@ -21,7 +25,7 @@ describe('statics of the four-bars', () => {
     })
 
     it(`${name}: the whole mechanism is in equilibrium — ground forces at A and D, the load and the torque (statics)`, () => {
-      const s = sizeFourBar(name, 150)
+      const s = sized(name, 150)
       const F = { x: -90, y: 60 }
       for (let d = -5; d <= 5; d += 1) {
         const p = poseAt(s.model, s.thetaMid + (d * Math.PI) / 180)!
@@ -41,9 +45,9 @@ describe('statics of the four-bars', () => {
     const a = (30 * Math.PI) / 180
     const load = { fx: 100, fy: -50 }
     const turned = { fx: load.fx * Math.cos(a) - load.fy * Math.sin(a), fy: load.fx * Math.sin(a) + load.fy * Math.cos(a) }
-    for (const name of FOURBAR_NAMES) {
-      const r0 = analyseFourBar(name, { stroke: 120, load, positions: 31 })
-      const r1 = analyseFourBar(name, { stroke: 120, load: turned, positions: 31, line: { point: { x: 200, y: -40 }, angleDeg: 30 } })
+    for (const name of fourBarIds) {
+      const r0 = analysed(name, { stroke: 120, load, positions: 31 })
+      const r1 = analysed(name, { stroke: 120, load: turned, positions: 31, line: { point: { x: 200, y: -40 }, angleDeg: 30 } })
       expect(r1.straightness.error).toBeCloseTo(r0.straightness.error, 9)
       expect(r1.peak.torque.value).toBeCloseTo(r0.peak.torque.value, 6)
       expect(r1.peak.pinForce.value).toBeCloseTo(r0.peak.pinForce.value, 6)
@@ -54,7 +58,7 @@ describe('statics of the four-bars', () => {
   })
 
   it('Hoeken at mid-stroke: a load square to the line needs no drive torque (the tracer moves along the line there; virtual work)', () => {
-    const r = analyseFourBar('hoeken', { stroke: 150, load: { fx: 0, fy: -140 }, positions: 3 })
+    const r = analysed('hoeken', { stroke: 150, load: { fx: 0, fy: -140 }, positions: 3 })
     expect(Math.abs(r.positions[1].torque)).toBeLessThan(1e-9)
   })
 })

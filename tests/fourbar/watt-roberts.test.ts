@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest'
-import { analyseFourBar, poseAt, sizeFourBar } from '@/lib/fourbar'
+import { poseAt } from '@/lib/fourbar'
+import { analysed, sized } from '../helpers/fourbar'
 
 describe("Watt's linkage (equal rockers r, coupler c, tracer at the coupler's middle)", () => {
   const S = 150
-  const s = sizeFourBar('watt', S) // r = S, c = S/2 by the default rule
+  const s = sized('watt', S) // r = S, c = S/2 by the default rule
   const r = s.model.a
   const c = s.model.b
 
@@ -21,7 +22,7 @@ describe("Watt's linkage (equal rockers r, coupler c, tracer at the coupler's mi
   })
 
   it('the path is symmetric about the centre point (the linkage is: a half turn about it maps it on itself)', () => {
-    const res = analyseFourBar('watt', { stroke: S, load: { fx: 0, fy: 0 } })
+    const res = analysed('watt', { stroke: S, load: { fx: 0, fy: 0 } })
     const n = res.path.length
     for (let i = 0; i < n; i += 25) {
       expect(res.path[i].x + res.path[n - 1 - i].x).toBeCloseTo(0, 9)
@@ -43,7 +44,7 @@ describe("Watt's linkage (equal rockers r, coupler c, tracer at the coupler's mi
   })
 
   it('the stroke is covered exactly: the ends of the path are ±S/2 along the line (sizing rule)', () => {
-    const res = analyseFourBar('watt', { stroke: S, load: { fx: 0, fy: 0 } })
+    const res = analysed('watt', { stroke: S, load: { fx: 0, fy: 0 } })
     expect(res.path[0].x).toBeCloseTo(-S / 2, 9)
     expect(res.path[res.path.length - 1].x).toBeCloseTo(S / 2, 9)
   })
@@ -52,8 +53,8 @@ describe("Watt's linkage (equal rockers r, coupler c, tracer at the coupler's mi
 describe("Roberts' linkage (frame d, rockers l, coupler d/2, coupler triangle B C T with B T = C T = l)", () => {
   const S = 150
   it('the tracer passes through both frame pivots and the middle of the frame line (derived: at T = A, C lies on the bisector of A D at height √(l² − d²/4))', () => {
-    const res = analyseFourBar('roberts', { stroke: S, load: { fx: 0, fy: 0 } })
-    const { model, thetaMid } = sizeFourBar('roberts', S)
+    const res = analysed('roberts', { stroke: S, load: { fx: 0, fy: 0 } })
+    const { model, thetaMid } = sized('roberts', S)
     const mid = poseAt(model, thetaMid)!.T
     expect(Math.hypot(mid.x, mid.y)).toBeLessThan(1e-12)
     const ends = [res.path[0], res.path[res.path.length - 1]]
@@ -65,7 +66,7 @@ describe("Roberts' linkage (frame d, rockers l, coupler d/2, coupler triangle B 
   })
 
   it('the path is symmetric about the bisector of the frame (mirror symmetry of the linkage)', () => {
-    const res = analyseFourBar('roberts', { stroke: S, load: { fx: 0, fy: 0 } })
+    const res = analysed('roberts', { stroke: S, load: { fx: 0, fy: 0 } })
     const n = res.path.length
     for (let i = 0; i < n; i += 25) {
       expect(res.path[i].x + res.path[n - 1 - i].x).toBeCloseTo(0, 7)
@@ -74,7 +75,7 @@ describe("Roberts' linkage (frame d, rockers l, coupler d/2, coupler triangle B 
   })
 
   it('taller rockers run straighter (more rocker length for the same frame)', () => {
-    const e = (l: number) => analyseFourBar('roberts', { stroke: S, load: { fx: 0, fy: 0 }, rules: { roberts: { rocker: l } } }).straightness.error
+    const e = (l: number) => analysed('roberts', { stroke: S, load: { fx: 0, fy: 0 } }, { rocker: l }).straightness.error
     expect(e(1.2)).toBeLessThan(e(0.8))
   })
 })
