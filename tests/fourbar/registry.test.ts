@@ -1,33 +1,20 @@
 import { describe, expect, it } from 'vitest'
 import { calculate } from '@/lib/calc/run'
 import { DEMO_CALCS } from '@/lib/demo/calcs'
-import { fromAssembly, ruleNumber, strokeEnds } from '@/lib/fourbar'
-import { pt } from '@/lib/fourbar/geometry'
 import { defineFourBar, fourBars, registerFourBar } from '@/lib/mechanisms'
+import { watt } from '@/lib/mechanisms/watt'
 
 /*
  * A four-bar plugs into every package's "Choice of mechanism" through the registry alone: this
- * test-only one is Watt's linkage with rockers of twice the stroke, declared here and registered at
- * run time, with no shared file edited. Watt's deviation for a coupler c and rockers r grows as
+ * test-only one is Watt's linkage with rockers of twice the stroke (the built-in one's sizing with
+ * another rule), declared here and registered at run time, with no shared file edited. Watt's deviation for a coupler c and rockers r grows as
  * y⁵/(4 c r³) (the series the Watt tests check), so longer rockers run straighter.
  */
 const longWatt = defineFourBar({
   id: 'test-long-watt',
   label: "Watt's linkage, long rockers",
   rule: { rocker: 2, coupler: 0.5 },
-  size(S, rule) {
-    const r = rule.rocker * S
-    const c = rule.coupler * S
-    const { model, thetaMid } = fromAssembly(pt(c / 2, r), pt(c / 2, 0), pt(-c / 2, 0), pt(-c / 2, -r), pt(0, 0))
-    return {
-      name: 'test-long-watt', label: "Watt's linkage, long rockers", model, thetaMid, ...strokeEnds(S),
-      rule: `rockers r = ${rule.rocker}·S = ${ruleNumber(r)} mm, coupler c = ${rule.coupler}·S`,
-      proportions: 'equal rockers, tracer at the middle of the coupler',
-      source: "Watt's linkage (test-only proportions)",
-      drive: 'rocker A B driven, oscillating',
-      tex: 'a = c = r',
-    }
-  },
+  size: (S, rule) => ({ ...watt.size(S, rule), name: 'test-long-watt', label: "Watt's linkage, long rockers", source: "Watt's linkage (test-only proportions)" }),
 })
 
 describe('a four-bar registered at run time', () => {
