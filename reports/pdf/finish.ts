@@ -14,6 +14,7 @@ import { PDFArray, PDFDict, PDFDocument, PDFHexString, PDFName, PDFNumber, PDFRe
 import { attachmentLetter } from '../model/back-matter'
 import { STATE_LABEL, formatDate, watermarkFor } from '../model/format'
 import type { Attachment, RenderOptions, ReportPackage } from '../types'
+import { pdfFace } from './fonts'
 import { titleCellText } from './frame'
 import { STEP } from './measure'
 import { BODY_BOTTOM, BODY_TOP, C, HEAD_RULE, MARGIN_X, OUTER_MARK, PAGE_SIZE, SIGN_OFF_CELLS, SIGN_OFF_ROLES, TITLE_BLOCK, TITLE_BLOCK_HEIGHT, contentWidth, titleCellAt, type TitleCellId } from './styles'
@@ -30,7 +31,7 @@ const ACCENT = hex(C.accent)
 
 const fontBytes = new Map<string, Promise<Uint8Array>>()
 function font(opts: RenderOptions, file: string) {
-  const full = path.join(opts.fontsDir ?? path.join(opts.rootDir ?? process.cwd(), 'fonts'), file)
+  const full = path.join(opts.fontsDir ?? path.join(opts.rootDir ?? process.cwd(), 'fonts'), pdfFace(file))
   if (!fontBytes.has(full)) fontBytes.set(full, readFile(/*turbopackIgnore: true*/ full).then((b) => new Uint8Array(b)))
   return fontBytes.get(full)!
 }
@@ -42,9 +43,40 @@ interface Fonts {
   mono: PDFFont
 }
 
+type GlyphRun = unknown
+type Layout = (text: string, features?: unknown) => GlyphRun
+const runs = new WeakMap<Uint8Array, Map<string, GlyphRun>>()
+
+/**
+ * Embeds a face and memoises its shaping per text, across packages: pdf-lib shapes every string it
+ * measures or draws (each title-block cell on every page) and would parse and shape the face anew
+ * for each package. A run is only read (glyph ids, advances, code points), so one run serves every
+ * document that embeds the same bytes.
+ */
+async function embed(doc: PDFDocument, data: Uint8Array): Promise<PDFFont> {
+  const f = await doc.embedFont(data, { subset: true })
+  const face = (f as unknown as { embedder?: { font?: { layout: Layout } } }).embedder?.font
+  if (face) {
+    let memo = runs.get(data)
+    if (!memo) runs.set(data, (memo = new Map()))
+    const memoised = memo
+    const layout = face.layout.bind(face)
+    face.layout = (text, features) => {
+      if (features !== undefined) return layout(text, features)
+      let run = memoised.get(text)
+      if (run === undefined) memoised.set(text, (run = layout(text)))
+      return run
+    }
+  }
+  return f
+}
+
+const charSets = new WeakMap<PDFFont, Set<number>>()
+
 /** Text the Noto subset can encode; a minus the Sans lacks becomes a hyphen, anything else '?', rather than failing the stamp. */
 function safe(f: PDFFont, text: string): string {
-  const set = new Set(f.getCharacterSet())
+  let set = charSets.get(f)
+  if (!set) charSets.set(f, (set = new Set(f.getCharacterSet())))
   return [...text].map((c) => (set.has(c.codePointAt(0)!) ? c : c === '\u2212' ? '-' : '?')).join('')
 }
 
@@ -305,10 +337,10 @@ export async function finishPdf(body: Uint8Array, pkg: ReportPackage, opts: Rend
   out.registerFontkit(fontkit)
   // Read in parallel, embed in a fixed order: object numbers must not depend on which read finished first.
   const [regularData, boldData, italicData, monoData] = await Promise.all(['NotoSans-Regular.ttf', 'NotoSans-Bold.ttf', 'NotoSans-Italic.ttf', 'NotoSansMono-Regular.ttf'].map((f) => font(opts, f)))
-  const regular = await out.embedFont(regularData, { subset: true })
-  const bold = await out.embedFont(boldData, { subset: true })
-  const italic = await out.embedFont(italicData, { subset: true })
-  const mono = await out.embedFont(monoData, { subset: true })
+  const regular = await embed(out, regularData)
+  const bold = await embed(out, boldData)
+  const italic = await embed(out, italicData)
+  const mono = await embed(out, monoData)
   const fonts = { regular, bold, italic, mono }
   const bodyPages = out.getPages()
   embedFallbacks(out, bodyPages, regular)

@@ -1,7 +1,10 @@
 /**
  * Registers the shipped Noto TTFs with react-pdf once per fonts folder. TTF,
- * not WOFF: fontkit parses TTF markedly faster. Hyphenation is switched off so
- * words never split unpredictably across lines.
+ * not WOFF: fontkit parses TTF markedly faster. The PDF faces are subsets
+ * (`*.pdf.ttf`, fonts/SUBSETS.md): the scripts a package prints and only the
+ * layout features a Latin/Greek text run uses (kern, liga, tnum, lnum), which
+ * halves fontkit's shaping time. Hyphenation is switched off so words never
+ * split unpredictably across lines.
  */
 import { createRequire } from 'node:module'
 import { dirname, join } from 'node:path'
@@ -42,10 +45,15 @@ export function fontsDir(opts: RenderOptions = {}): string {
   return opts.fontsDir ?? join(opts.rootDir ?? process.cwd(), 'fonts')
 }
 
+/** The PDF subset of a shipped face: `NotoSans-Regular.ttf` → `NotoSans-Regular.pdf.ttf`. */
+export function pdfFace(file: string): string {
+  return file.replace(/\.ttf$/, '.pdf.ttf')
+}
+
 export function registerFonts(opts: RenderOptions = {}): void {
   const dir = fontsDir(opts)
   if (registered === dir) return
-  const f = (file: string) => join(dir, file)
+  const f = (file: string) => join(dir, pdfFace(file))
   Font.register({
     family: SANS,
     fonts: [
@@ -105,7 +113,8 @@ export function prepareFonts(opts: RenderOptions = {}): Promise<void> {
       const memo = new Map<string, unknown>()
       data.layout = (text, features, ...rest) => {
         if (typeof text !== 'string' || rest.some((r) => r !== undefined && r !== 'ltr')) return original(text, features, ...rest)
-        const key = `${JSON.stringify(features ?? null)}\u0000${text}`
+        // No features and an empty list shape alike (measure.ts passes none, textkit passes []).
+        const key = features == null || (Array.isArray(features) && features.length === 0) ? text : `${JSON.stringify(features)}\u0000${text}`
         let run = memo.get(key)
         if (run === undefined) {
           if (memo.size > 50_000) memo.clear()
