@@ -74,8 +74,6 @@ export function withTolerances(mech: MechanismResult, input: Inputs, checks: Che
       limit: input.straightnessTolerance,
       monteCarlo: (opts.samples ?? DEFAULT_SAMPLES) > 0 ? { samples: opts.samples ?? DEFAULT_SAMPLES, seed: opts.seed ?? 1, distribution: opts.distribution ?? 'normal', perItem: opts.distributions, onProgress } : undefined,
     })
-    const unknown = Object.keys(opts.distributions ?? {}).find((k) => !t.items.some((i) => i.id === k))
-    if (unknown) return { ok: false, fieldErrors: { [`tolerances.distributions.${unknown}`]: `no dimension "${unknown}"; the dimensions are ${t.items.filter((i) => i.kind !== 'clearance').map((i) => i.id).join(', ')}` } }
     const worst = t.worstCase.confirmed
     const criterion: Criterion = {
       id: 'toleranced-straightness',

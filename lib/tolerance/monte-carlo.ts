@@ -7,7 +7,7 @@
  */
 import { scratchFor, solvePositions, type Effect } from './kinematics'
 import { createRng } from './prng'
-import { baseValues, type ToleranceSetup } from './setup'
+import { baseValues, ToleranceInputError, type ToleranceSetup } from './setup'
 import { deviationOf } from './straightness'
 
 export type Distribution = 'normal' | 'uniform'
@@ -74,6 +74,8 @@ function runner(setup: ToleranceSetup, opts: MonteCarloOptions) {
   if (!(sigmas > 0)) throw new Error('sigmas must be positive')
   const truncate = opts.truncate ?? false
   const dist = opts.distribution ?? 'normal'
+  const unknown = Object.keys(opts.perItem ?? {}).find((k) => !setup.items.some((it) => it.id === k))
+  if (unknown) throw new ToleranceInputError(`distributions.${unknown}`, `no dimension "${unknown}"; the dimensions are ${setup.items.filter((it) => it.kind !== 'clearance').map((it) => it.id).join(', ')}`)
   const rng = createRng(opts.seed ?? 1)
   // Random items only, with their effects; fixed shifts are folded into per-position offsets once.
   const randomIdx: number[] = []
