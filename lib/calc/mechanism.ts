@@ -202,7 +202,11 @@ export type ParsedMechanismInput = z.output<typeof mechanismInputSchema>
  * no positions), not an exception; only a malformed input throws (ZodError).
  */
 export function runMechanism(raw: MechanismInput | AnyMechanismInput): MechanismResult {
-  const input = mechanismInputSchema.parse(raw)
+  return analyseParsed(mechanismInputSchema.parse(raw))
+}
+
+/** runMechanism on an input already parsed by mechanismInputSchema. */
+export function analyseParsed(input: ParsedMechanismInput): MechanismResult {
   const { cell, crank, offset } = getMechanism(input.mechanism).model(input.geometry)
   const out = analyse({
     cell,

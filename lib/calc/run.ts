@@ -3,7 +3,7 @@ import { fieldErrorsOf } from '@/lib/schemas/field-errors'
 import { GENERAL_CAUTION } from '@/lib/cautions'
 import { rangeErrors } from '@/lib/bench/ranges'
 import { sizeIssues } from '@/lib/checks/validate'
-import { mechanismBoundErrors, mechanismInputSchema, runMechanism, type AnyMechanismInput } from './mechanism'
+import { analyseParsed, mechanismBoundErrors, mechanismInputSchema, type AnyMechanismInput } from './mechanism'
 import { formatNumber, texNumber } from '@/lib/units/format'
 import type { CalcResult, CalcVerdict, CheckItem, Criterion, MaterialUse, MechanismResult, Step } from '@/lib/contract'
 import { basisText } from './basis-text'
@@ -121,7 +121,7 @@ export function runCalc(input: CalcInput, opts: RunOptions = {}): { ok: true; re
   // A case at speed joins each static case when an operating speed is given (lib/calc/at-speed.ts).
   // So do the straightness under tolerances and clearance when asked for (lib/calc/tolerances.ts).
   const parsed = mechanismInputSchema.parse(input.mechanism)
-  const speed = withOperatingSpeed(runMechanism(input.mechanism), parsed, input.checks)
+  const speed = withOperatingSpeed(analyseParsed(parsed), parsed, input.checks)
   if (!speed.ok) return speed
   const toleranced = withTolerances(speed.result, parsed, input.checks, opts.onProgress)
   if (!toleranced.ok) return toleranced
