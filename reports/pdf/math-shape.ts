@@ -8,7 +8,16 @@ import { TeX } from 'mathjax-full/js/input/tex.js'
 import { SVG } from 'mathjax-full/js/output/svg.js'
 import { liteAdaptor, type LiteAdaptor } from 'mathjax-full/js/adaptors/liteAdaptor.js'
 import { RegisterHTMLHandler } from 'mathjax-full/js/handlers/html.js'
-import { AllPackages } from 'mathjax-full/js/input/tex/AllPackages.js'
+// Only the packages the templates and the calc's TeX use (base, ams: \dfrac, \tfrac, \operatorname,
+// bmatrix), the two that decide how a mistake shows (the TeX source, an undefined macro in red), and
+// braket, which under AllPackages is what sets a bare `|` (|ΣF|) — kept so formulas keep their
+// spacing. Each loaded package is one more macro table every control sequence is looked up in, and
+// AllPackages costs ~0.15 s to load.
+import 'mathjax-full/js/input/tex/base/BaseConfiguration.js'
+import 'mathjax-full/js/input/tex/ams/AmsConfiguration.js'
+import 'mathjax-full/js/input/tex/braket/BraketConfiguration.js'
+import 'mathjax-full/js/input/tex/noerrors/NoErrorsConfiguration.js'
+import 'mathjax-full/js/input/tex/noundefined/NoUndefinedConfiguration.js'
 import type { LiteElement, LiteNode } from 'mathjax-full/js/adaptors/lite/Element.js'
 import { asText, type MathText } from './math-text'
 import { type Affine, multiply, parseTransform, rectPath, transformPath } from './affine'
@@ -37,6 +46,8 @@ interface Sink {
   texts: MathText[]
 }
 
+const TEX_PACKAGES = ['base', 'ams', 'braket', 'noerrors', 'noundefined']
+
 type Doc = ReturnType<typeof mathjax.document>
 let state: { adaptor: LiteAdaptor; doc: Doc } | null = null
 
@@ -45,7 +56,7 @@ function engine() {
     const adaptor = liteAdaptor()
     RegisterHTMLHandler(adaptor)
     const doc = mathjax.document('', {
-      InputJax: new TeX({ packages: AllPackages.filter((p) => p !== 'bussproofs') }),
+      InputJax: new TeX({ packages: TEX_PACKAGES }),
       OutputJax: new SVG({ fontCache: 'none' }),
     })
     state = { adaptor, doc }

@@ -54,8 +54,23 @@ function mapCode(cp: number): { family: string; cp: number } {
   return { family: MATH_MAIN, cp }
 }
 
-/** Bounding box of an outline's points (control points included, as in a TrueType glyf header). */
+const boxes = new Map<string, [number, number, number, number]>()
+
+/**
+ * Bounding box of an outline's points (control points included, as in a TrueType glyf header).
+ * MathJax writes the same path for every use of a glyph, so boxes are kept by path.
+ */
 function outlineBox(d: string): [number, number, number, number] {
+  let box = boxes.get(d)
+  if (!box) {
+    box = computeBox(d)
+    if (boxes.size > 20_000) boxes.clear()
+    boxes.set(d, box)
+  }
+  return box
+}
+
+function computeBox(d: string): [number, number, number, number] {
   const box: [number, number, number, number] = [Infinity, Infinity, -Infinity, -Infinity]
   let cmd = ''
   let axis = 0
@@ -71,6 +86,25 @@ function outlineBox(d: string): [number, number, number, number] {
     if (cmd !== 'H' && cmd !== 'V') axis = 1 - axis
   }
   return box
+}
+
+const glyphs = new WeakMap<FontLike, Map<number, Glyph | null>>()
+
+/** A face's glyph for a code point (its advance and box; decoding the outline for the box is the dear part), or null. */
+function glyphOf(font: FontLike, cp: number): Glyph | null {
+  let byCode = glyphs.get(font)
+  if (!byCode) glyphs.set(font, (byCode = new Map()))
+  let g = byCode.get(cp)
+  if (g === undefined) {
+    if (font.unitsPerEm !== 1000 || !font.hasGlyphForCodePoint(cp)) g = null
+    else {
+      const glyph = font.glyphForCodePoint(cp)
+      const b = glyph.bbox
+      g = { advanceWidth: glyph.advanceWidth, bbox: { minX: b.minX, minY: b.minY, maxX: b.maxX, maxY: b.maxY } }
+    }
+    byCode.set(cp, g)
+  }
+  return g
 }
 
 const near = (a: number, b: number, tol: number) => Math.abs(a - b) <= tol
@@ -92,8 +126,8 @@ export function asText(adaptor: LiteAdaptor, el: LiteElement, m: Affine): MathTe
     if (family && mapped.family !== family) return null
     family = mapped.family
     const font = face(family)
-    if (!font || font.unitsPerEm !== 1000 || !font.hasGlyphForCodePoint(mapped.cp)) return null
-    const glyph = font.glyphForCodePoint(mapped.cp)
+    const glyph = font ? glyphOf(font, mapped.cp) : null
+    if (!glyph) return null
     const t = (adaptor.getAttribute(path, 'transform') ?? '').match(/^translate\(([-\d.]+)(?:[ ,]+([-\d.]+))?\)$/)
     const dx = t ? Number(t[1]) : 0
     if ((t && Number(t[2] ?? 0) !== 0) || !near(dx, pen, ADVANCE_TOLERANCE)) return null
