@@ -83,4 +83,14 @@ describe('renderPdf', () => {
     pkg.result = { ...pkg.result, cautions: ['Keep u ≤ 1 at −20 °C.'] }
     expect(pdfText(await renderPdf(pkg))).toContain('Keep u ≤ 1 at −20 °C.')
   }, SLOW)
+
+  // The PDF faces are subsets (fonts/SUBSETS.md); Latin Extended-A is in them for names like these.
+  it('prints Latin Extended-A names in the body and in the stamped title block', async () => {
+    const pkg = peaucellierPackage()
+    pkg.result = { ...pkg.result, cautions: ['Checked on site in Łódź by Çelik and Țară.'] }
+    pkg.revision = { ...pkg.revision, engineer: { ...pkg.revision.engineer, name: 'Zdeněk Dvořák' } }
+    const text = pdfText(await renderPdf(pkg))
+    expect(text).toContain('Checked on site in Łódź by Çelik and Țară.')
+    expect(text).toContain('Zdeněk Dvořák')
+  }, SLOW)
 })
