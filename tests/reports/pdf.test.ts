@@ -84,13 +84,14 @@ describe('renderPdf', () => {
     expect(pdfText(await renderPdf(pkg))).toContain('Keep u ≤ 1 at −20 °C.')
   }, SLOW)
 
-  // The PDF faces are subsets (fonts/SUBSETS.md); Latin Extended-A is in them for names like these.
-  it('prints Latin Extended-A names in the body and in the stamped title block', async () => {
+  // The PDF faces are subsets (fonts/SUBSETS.md) that keep the full faces' scripts, for names like these.
+  it('prints Latin Extended, Vietnamese and Cyrillic names in the body and in the stamped title block', async () => {
     const pkg = peaucellierPackage()
-    pkg.result = { ...pkg.result, cautions: ['Checked on site in Łódź by Çelik and Țară.'] }
-    pkg.revision = { ...pkg.revision, engineer: { ...pkg.revision.engineer, name: 'Zdeněk Dvořák' } }
+    pkg.result = { ...pkg.result, cautions: ['Checked on site in Łódź by Çelik, Țară, Nguyễn and Соколов.'] }
+    pkg.revision = { ...pkg.revision, engineer: { ...pkg.revision.engineer, name: 'Zdeněk Dvořák' }, checker: { ...pkg.revision.checker, name: 'Ирина Соколова' } }
     const text = pdfText(await renderPdf(pkg))
-    expect(text).toContain('Checked on site in Łódź by Çelik and Țară.')
+    expect(text).toContain('Checked on site in Łódź by Çelik, Țară, Nguyễn and Соколов.')
     expect(text).toContain('Zdeněk Dvořák')
+    expect(text).toContain('Ирина Соколова')
   }, SLOW)
 })
