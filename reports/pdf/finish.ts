@@ -14,7 +14,6 @@ import { PDFArray, PDFDict, PDFDocument, PDFHexString, PDFName, PDFNumber, PDFRe
 import { attachmentLetter } from '../model/back-matter'
 import { STATE_LABEL, formatDate, watermarkFor } from '../model/format'
 import type { Attachment, RenderOptions, ReportPackage } from '../types'
-import { pdfFace } from './fonts'
 import { titleCellText } from './frame'
 import { STEP } from './measure'
 import { BODY_BOTTOM, BODY_TOP, C, HEAD_RULE, MARGIN_X, OUTER_MARK, PAGE_SIZE, SIGN_OFF_CELLS, SIGN_OFF_ROLES, TITLE_BLOCK, TITLE_BLOCK_HEIGHT, contentWidth, titleCellAt, type TitleCellId } from './styles'
@@ -30,8 +29,12 @@ const RULE = hex(C.rule)
 const ACCENT = hex(C.accent)
 
 const fontBytes = new Map<string, Promise<Uint8Array>>()
+/**
+ * The full face, not the react-pdf subset (fonts/*.pdf.ttf): pdf-lib's subsetter drew the subset's
+ * glyphs blank ("In check" stamped as "c  ck"); the shaping memo below keeps the full face cheap.
+ */
 function font(opts: RenderOptions, file: string) {
-  const full = path.join(opts.fontsDir ?? path.join(opts.rootDir ?? process.cwd(), 'fonts'), pdfFace(file))
+  const full = path.join(opts.fontsDir ?? path.join(opts.rootDir ?? process.cwd(), 'fonts'), file)
   if (!fontBytes.has(full)) fontBytes.set(full, readFile(/*turbopackIgnore: true*/ full).then((b) => new Uint8Array(b)))
   return fontBytes.get(full)!
 }

@@ -3,7 +3,7 @@ import { PDFDocument, StandardFonts } from 'pdf-lib'
 import { CAUTION_BASE, finishPdf, formatValue, renderBody, renderPdf, sha256Hex, watermarkFor } from '@/reports/index'
 import { peaucellierPackage } from './fixtures/peaucellier'
 import { hartPackage } from './fixtures/hart'
-import { pageCount, pdfRawText, pdfText, redTint, squash } from './helpers'
+import { inkOfWords, pageCount, pdfRawText, pdfText, redTint, squash } from './helpers'
 
 const SLOW = 180_000
 
@@ -89,9 +89,17 @@ describe('renderPdf', () => {
     const pkg = peaucellierPackage()
     pkg.result = { ...pkg.result, cautions: ['Checked on site in Łódź by Çelik, Țară, Nguyễn and Соколов.'] }
     pkg.revision = { ...pkg.revision, engineer: { ...pkg.revision.engineer, name: 'Zdeněk Dvořák' }, checker: { ...pkg.revision.checker, name: 'Ирина Соколова' } }
-    const text = pdfText(await renderPdf(pkg))
+    const bytes = await renderPdf(pkg)
+    const text = pdfText(bytes)
     expect(text).toContain('Checked on site in Łódź by Çelik, Țară, Nguyễn and Соколов.')
     expect(text).toContain('Zdeněk Dvořák')
     expect(text).toContain('Ирина Соколова')
+    // Every word stamped into the title block is drawn, not only present in the text layer: a face
+    // that lacked the glyphs once stamped "c  ck" for "In check" and an empty sheet cell.
+    const doc = await PDFDocument.load(bytes, { updateMetadata: false })
+    const height = doc.getPage(0).getHeight()
+    const words = inkOfWords(bytes, 1, height - 70)
+    expect(words.map((w) => w.word)).toEqual(expect.arrayContaining(['Соколова', 'Dvořák', 'of']))
+    for (const w of words) expect({ word: w.word, drawn: w.ink > 0.02 }).toEqual({ word: w.word, drawn: true })
   }, SLOW)
 })
