@@ -23,6 +23,8 @@ test('signed-out screens', async ({ page }) => {
 })
 
 test('the engineer’s screens: projects, register, calc bench with package, sizing, settings, to-do', async ({ page }) => {
+  // Eight axe passes, one over the calc page with its whole package: on a loaded two-core machine that outran the default minute.
+  test.slow()
   await signInAs(page, 'engineer')
   await audit(page, 'projects')
   // From a fresh load, the first Tab lands on the skip link.
