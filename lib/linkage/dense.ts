@@ -260,6 +260,8 @@ export interface SolvePlan {
   n: number
   pattern: Int32Array
   root: PlanStep
+  /** Branches recorded so far: the tree starts afresh past BRANCHES_KEPT (a long-running server meets many geometries). */
+  branchCount: number
   /** The branch taken at each step of the current solve, for the back-substitution. */
   path: PlanBranch[]
   sol: Float64Array
@@ -350,6 +352,12 @@ function planBranch(n: number, s: PlanStep, p: number): PlanBranch {
 /** Plans by pattern: a plan depends on nothing else, and every sweep of a mechanism meets the same pivot sequences. */
 const plans = new Map<string, SolvePlan>()
 const PLANS_KEPT = 64
+const BRANCHES_KEPT = 20_000
+
+const planRoot = (n: number, pattern: Int32Array): PlanStep => {
+  const { rowMask0, colMask0 } = maskScratch(n, pattern)
+  return planStep(n, 0, Int32Array.from({ length: n }, (_, i) => i), rowMask0.slice(), colMask0.slice())
+}
 
 /**
  * The plan for `pattern`, shared by every solve of that pattern (solvePlanned is synchronous, so
@@ -360,9 +368,7 @@ export function solvePlan(n: number, pattern: Int32Array): SolvePlan {
   let plan = plans.get(key)
   if (!plan) {
     if (plans.size >= PLANS_KEPT) plans.clear()
-    const { rowMask0, colMask0 } = maskScratch(n, pattern)
-    const root = planStep(n, 0, Int32Array.from({ length: n }, (_, i) => i), rowMask0.slice(), colMask0.slice())
-    plan = { n, pattern, root, path: new Array(n), sol: new Float64Array(n) }
+    plan = { n, pattern, root: planRoot(n, pattern), branchCount: 0, path: new Array(n), sol: new Float64Array(n) }
     plans.set(key, plan)
   }
   return plan
@@ -375,11 +381,19 @@ export function solvePlan(n: number, pattern: Int32Array): SolvePlan {
  * zeros, which change no bit.
  */
 export function recordPivots(plan: SolvePlan, pivots: Int32Array): void {
+  if (plan.branchCount > BRANCHES_KEPT) {
+    plan.root = planRoot(plan.n, plan.pattern)
+    plan.branchCount = 0
+  }
   let s: PlanStep | null = plan.root
   while (s) {
     const t = s.candPos.indexOf(pivots[s.c])
     if (t < 0) throw new Error(`pivot ${pivots[s.c]} at step ${s.c} is not a candidate of the pattern`)
-    s = (s.branches[t] ??= planBranch(plan.n, s, pivots[s.c])).next
+    if (!s.branches[t]) {
+      s.branches[t] = planBranch(plan.n, s, pivots[s.c])
+      plan.branchCount++
+    }
+    s = s.branches[t]!.next
   }
 }
 
