@@ -31,12 +31,17 @@ export type BuiltInMechanismInput = MechanismInputOf<(typeof BUILT_IN)[number]>
 
 const registry = new Map<MechanismId, MechanismDef>(BUILT_IN.map((m) => [m.id, m as unknown as MechanismDef]))
 
-/** Adds a mechanism at run time (tests, plug-ins). Ids are unique; registering the same definition twice is a no-op. */
+/** Adds a definition to one of the lists. Ids are unique; registering the same definition twice is a no-op. */
+function addTo<D extends { id: string }>(list: Map<string, D>, what: string, def: D): void {
+  const known = list.get(def.id)
+  if (known && known !== def) throw new Error(`${what} "${def.id}" is already registered`)
+  if (!/^[a-z][a-z0-9-]*$/.test(def.id)) throw new Error(`${what} id "${def.id}" must be lower-case letters, digits and -`)
+  list.set(def.id, def)
+}
+
+/** Adds a mechanism at run time (tests, plug-ins). */
 export function registerMechanism<S extends GeometrySchema>(def: MechanismDef<S>): void {
-  const known = registry.get(def.id)
-  if (known && known !== (def as unknown)) throw new Error(`mechanism "${def.id}" is already registered`)
-  if (!/^[a-z][a-z0-9-]*$/.test(def.id)) throw new Error(`mechanism id "${def.id}" must be lower-case letters, digits and -`)
-  registry.set(def.id, def as unknown as MechanismDef)
+  addTo(registry, 'mechanism', def as unknown as MechanismDef)
 }
 
 export function mechanisms(): MechanismDef[] {
@@ -94,12 +99,9 @@ const FOUR_BARS = [watt, chebyshev, roberts, hoeken] as const
 
 const fourBarRegistry = new Map<string, FourBarDef>(FOUR_BARS.map((f) => [f.id, f as unknown as FourBarDef]))
 
-/** Adds a four-bar to the comparison at run time (tests, plug-ins). Ids are unique; the same definition twice is a no-op. */
+/** Adds a four-bar to the comparison at run time (tests, plug-ins). */
 export function registerFourBar<R extends Record<string, number>>(def: FourBarDef<R>): void {
-  const known = fourBarRegistry.get(def.id)
-  if (known && known !== (def as unknown)) throw new Error(`four-bar "${def.id}" is already registered`)
-  if (!/^[a-z][a-z0-9-]*$/.test(def.id)) throw new Error(`four-bar id "${def.id}" must be lower-case letters, digits and -`)
-  fourBarRegistry.set(def.id, def as unknown as FourBarDef)
+  addTo(fourBarRegistry, 'four-bar', def as unknown as FourBarDef)
 }
 
 export function fourBars(): FourBarDef[] {

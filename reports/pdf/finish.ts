@@ -76,7 +76,7 @@ async function embed(doc: PDFDocument, data: Uint8Array): Promise<PDFFont> {
 
 const charSets = new WeakMap<PDFFont, Set<number>>()
 
-/** Text the Noto subset can encode; a minus the Sans lacks becomes a hyphen, anything else '?', rather than failing the stamp. */
+/** Text the embedded face can encode; a minus the Sans lacks becomes a hyphen, anything else '?', rather than failing the stamp. */
 function safe(f: PDFFont, text: string): string {
   let set = charSets.get(f)
   if (!set) charSets.set(f, (set = new Set(f.getCharacterSet())))

@@ -13,30 +13,9 @@ import type { RenderOptions, ReportPackage } from '../types'
 import { countPages, finishPdf } from './finish'
 import { pdfMarkdownComponents, pdfReportComponents, pdfWrapper } from './components'
 import { prepareFonts } from './fonts'
-import { texToShape } from './math-shape'
 import { contentWidth } from './styles'
 
 const componentCache = new Map<string, ReturnType<typeof getMDXComponent>>()
-
-/** The display TeX of every step: the steps' boxes set each of them (measure.ts, steps.tsx). */
-function stepFormulas(pkg: ReportPackage): string[] {
-  return pkg.result.steps.flatMap((s) => [s.formula, s.substituted, s.criterion]).filter((t): t is string => !!t)
-}
-
-/**
- * The first render in a process compiles the template, and the main thread mostly waits for
- * esbuild meanwhile: typeset the step formulas (needed anyway, and cached by TeX) until it is done,
- * one at a time so esbuild's replies are not kept waiting. Same shapes, whatever the timing.
- */
-async function typesetWhile(pending: Promise<unknown>, texs: string[]): Promise<void> {
-  let settled = false
-  pending.then(() => (settled = true), () => (settled = true))
-  for (const tex of texs) {
-    await new Promise((resolve) => setImmediate(resolve))
-    if (settled) return
-    texToShape(tex, true)
-  }
-}
 
 /** The package as handed out: the body, stamped for its state and signatures (finishPdf). */
 export async function renderPdf(pkg: ReportPackage, opts: RenderOptions = {}): Promise<Uint8Array> {
@@ -50,9 +29,7 @@ export async function renderPdf(pkg: ReportPackage, opts: RenderOptions = {}): P
 export async function renderBody(pkg: ReportPackage, opts: RenderOptions = {}): Promise<Uint8Array> {
   await prepareFonts(opts)
   const source = await loadTemplate(pkg.calc.type, opts)
-  const compiling = compileTemplate(source, 'pdf')
-  await typesetWhile(compiling, stepFormulas(pkg))
-  const compiled = await compiling
+  const compiled = await compileTemplate(source, 'pdf')
   let Content = componentCache.get(compiled.code)
   if (!Content) {
     Content = getMDXComponent(compiled.code)
